@@ -1,0 +1,289 @@
+// Flashes: the state from any supported pair of inputs, with phase identification.
+// Single-phase solves are nested one-dimensional Newton iterations, each bracketed and capped.
+import { convergenceError, DomeprintError, inputError, rangeError, requireNumber } from "../errors.js";
+import { densityTP, type Branch } from "./density.js";
+import type { Fluid } from "./fluid.js";
+import { CP, DPDT, H, propertiesTRho, S } from "./properties.js";
+import { checkReferenceName, referenceOffset, type ReferenceName, type ReferenceOffset } from "./reference.js";
+import { saturationP, saturationPressureRange, saturationT, type Saturation } from "./saturation.js";
+import { singlePhase, singleState, tieLine, twoPhaseState, type State } from "./state.js";
+
+export type InputName = "T" | "p" | "rho" | "v" | "h" | "s" | "x";
+export const INPUT_NAMES: readonly InputName[] = ["T", "p", "rho", "v", "h", "s", "x"];
+export type Inputs = Partial<Record<InputName, number>>;
+
+/** The pairs the engine solves, in the order they are listed to users. */
+export const SUPPORTED_PAIRS = ["T,p", "p,h", "p,s", "T,s", "T,x", "p,x", "T,rho", "T,v"] as const;
+
+const MAX_ITER = 100;
+
+// ---------------------------------------------------------------- range checks
+
+function checkT(f: Fluid, T: number): void {
+  requireNumber("T", T, { positive: true });
+  if (T < f.Tmin - 1e-9) throw rangeError("T", T, `${f.Tmin} K to ${f.Tmax} K for ${f.id}`, "E_BELOW_TRIPLE");
+  if (T > f.Tmax) throw rangeError("T", T, `${f.Tmin} K to ${f.Tmax} K for ${f.id}`);
+}
+
+function checkP(f: Fluid, p: number): void {
+  requireNumber("p", p, { positive: true });
+  if (p > f.pmax) throw rangeError("p", p, `above 0 Pa up to ${f.pmax} Pa for ${f.id}`);
+}
+
+function checkX(x: number): void {
+  requireNumber("x", x);
+  if (x > 1) throw inputError("x", x, "quality above 1", "0 ≤ x ≤ 1");
+}
+
+/** Below this temperature the two-phase region exists at T. */
+function hasTwoPhaseAtT(f: Fluid, T: number): boolean {
+  return T <= f.satTmax;
+}
+
+/** Below this pressure the two-phase region exists at p. */
+function twoPhasePmax(f: Fluid): number {
+  return f.pseudoPure ? f.pc : saturationPressureRange(f)[1];
+}
+
+// ---------------------------------------------------------------- single-phase solves at fixed p
+
+type Target = "h" | "s";
+
+/**
+ * T (and molar ρ) at pressure p where h or s (native reference) equals `target`, searched in [Tlo, Thi].
+ * `branchAt` picks the density root for each trial temperature; `capRho` bounds the vapour root.
+ */
+function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: number, Thi: number, T0: number,
+  branchAt: (T: number) => Branch, rho0?: number, capRho?: number, atLow: "triple" | "boundary" = "boundary"): { T: number; rho: number } {
+  const o = f.tmp;
+  let lo = Tlo, hi = Thi;
+  let T = Math.min(Math.max(T0, lo), hi);
+  let rho = rho0;
+  for (let k = 0; k < MAX_ITER; k++) {
+    const br = branchAt(T);
+    rho = densityTP(f, T, p, br, rho, br === "vapour" ? capRho : undefined);
+    propertiesTRho(f.model, f.M, T, rho, o);
+    const F = (which === "h" ? o[H]! : o[S]!) - target;
+    const slope = which === "h" ? o[CP]! : o[CP]! / T;
+    const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
+    if (Math.abs(F) <= 1e-13 * scale) return { T, rho };
+    if (F > 0) hi = T; else lo = T;
+    let next = T - F / slope;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    if (Math.abs(next - T) <= 1e-13 * T) {
+      // The bracket has closed on an end of the range: the target lies outside it.
+      if (T - Tlo <= 1e-9 * T && F > 0) {
+        const code = atLow === "triple" ? "E_BELOW_TRIPLE" : "E_RANGE";
+        throw rangeError(which, target, `${which} at p = ${p} Pa between its values at ${Tlo} K and ${Thi} K for ${f.id}`, code);
+      }
+      if (Thi - T <= 1e-9 * T && F < 0) throw rangeError(which, target, `${which} at p = ${p} Pa up to its value at T_max = ${Thi} K for ${f.id}`);
+      return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined) };
+    }
+    T = next;
+  }
+  throw convergenceError(`${which} at fixed pressure`, `p = ${p} Pa, ${which} = ${target} of ${f.id}`);
+}
+
+/** The density branch for a single-phase state at pressure p above every saturation pressure. */
+function branchAbove(f: Fluid) {
+  return (T: number): Branch => (T < Math.min(f.satTmax, f.Tc) ? "liquid" : "single");
+}
+
+function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: ReferenceName, off: ReferenceOffset): State {
+  checkP(f, p);
+  requireNumber(which, value, { allowNegative: true });
+  const target = value - (which === "h" ? off.dh : off.ds);
+  if (p < twoPhasePmax(f)) {
+    const sat = saturationP(f, p);
+    const t = tieLine(f, sat);
+    const yL = which === "h" ? t.hL : t.sL, yV = which === "h" ? t.hV : t.sV;
+    if (target >= yL && target <= yV) return twoPhaseState(f, sat, (target - yL) / (yV - yL), ref, off);
+    const o = f.tmp;
+    if (target > yV) {
+      propertiesTRho(f.model, f.M, sat.TV, sat.rhoV, o);
+      const cp = o[CP]!;
+      const T0 = sat.TV + (which === "h" ? (target - yV) / cp : sat.TV * (Math.exp((target - yV) / cp) - 1));
+      if (sat.TV >= f.Tmax) throw rangeError(which, value, `at most the saturated vapour value at p = ${p} Pa for ${f.id} (T_max reached)`);
+      const r = solveAtP(f, p, which, target, sat.TV, f.Tmax, T0, (T) => (T < f.Tc ? "vapour" : "single"), sat.rhoV, sat.rhoV);
+      return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off);
+    }
+    propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
+    const cp = o[CP]!;
+    const T0 = sat.TL - (which === "h" ? (yL - target) / cp : sat.TL * (1 - Math.exp((target - yL) / cp)));
+    const r = solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple");
+    return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
+  }
+  const r = solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
+  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
+}
+
+// ---------------------------------------------------------------- pseudo-pure two-phase at fixed T
+
+/** Quality at which a pseudo-pure blend at pressure p reaches temperature T (T linear in x across the glide). */
+function pseudoQuality(sat: Saturation, T: number): number {
+  const span = sat.TV - sat.TL;
+  return span > 0 ? Math.min(1, Math.max(0, (T - sat.TL) / span)) : 0;
+}
+
+/**
+ * A pseudo-pure two-phase state at temperature T where `measure` (monotone in p) equals target:
+ * bisection in p between the dew and bubble pressures at T.
+ */
+function pseudoTwoPhaseAtT(f: Fluid, T: number, measure: (s: State) => number, target: number, ref: ReferenceName, off: ReferenceOffset): State {
+  let lo = f.pDew!.value(T), hi = f.pBubble!.value(T);
+  const at = (p: number) => { const sat = saturationP(f, p); return twoPhaseState(f, sat, pseudoQuality(sat, T), ref, off); };
+  const mLo = measure(at(lo)), mHi = measure(at(hi));
+  const increasing = mHi > mLo;
+  let st = at(0.5 * (lo + hi));
+  for (let k = 0; k < 200 && hi - lo > 1e-13 * hi; k++) {
+    const mid = 0.5 * (lo + hi);
+    st = at(mid);
+    if ((measure(st) > target) === increasing) hi = mid; else lo = mid;
+  }
+  return st;
+}
+
+// ---------------------------------------------------------------- the flashes
+
+export function flashTP(f: Fluid, T: number, p: number, ref: ReferenceName = "native"): State {
+  checkT(f, T);
+  checkP(f, p);
+  const off = referenceOffset(f, ref);
+  if (T < f.Tc && p < f.pc && hasTwoPhaseAtT(f, T)) {
+    if (f.pseudoPure) {
+      const pb = f.pBubble!.value(T), pd = f.pDew!.value(T);
+      if (p >= pb) return singleState(f, T, densityTP(f, T, p, "liquid"), "liquid", ref, off);
+      if (p <= pd) return singleState(f, T, densityTP(f, T, p, "vapour"), "vapour", ref, off);
+      const sat = saturationP(f, p);
+      return twoPhaseState(f, sat, pseudoQuality(sat, T), ref, off);
+    }
+    const sat = saturationT(f, T);
+    // At exactly the saturation pressure the state is reported as saturated liquid.
+    if (p >= sat.pL) return singleState(f, T, densityTP(f, T, p, "liquid", sat.rhoL), "liquid", ref, off);
+    return singleState(f, T, densityTP(f, T, p, "vapour", undefined, sat.rhoV), "vapour", ref, off);
+  }
+  const br: Branch = T < f.Tc ? "liquid" : "single";
+  return singleState(f, T, densityTP(f, T, p, br), singlePhase(f, T, p, true), ref, off);
+}
+
+export function flashPH(f: Fluid, p: number, h: number, ref: ReferenceName = "native"): State {
+  return flashPTarget(f, p, "h", h, ref, referenceOffset(f, ref));
+}
+
+export function flashPS(f: Fluid, p: number, s: number, ref: ReferenceName = "native"): State {
+  return flashPTarget(f, p, "s", s, ref, referenceOffset(f, ref));
+}
+
+export function flashPX(f: Fluid, p: number, x: number, ref: ReferenceName = "native"): State {
+  checkP(f, p);
+  checkX(x);
+  if (p >= twoPhasePmax(f)) throw rangeError("p", p, `below ${twoPhasePmax(f)} Pa (the two-phase region) for a quality of ${f.id}`);
+  return twoPhaseState(f, saturationP(f, p), x, ref, referenceOffset(f, ref));
+}
+
+export function flashTX(f: Fluid, T: number, x: number, ref: ReferenceName = "native"): State {
+  checkT(f, T);
+  checkX(x);
+  const off = referenceOffset(f, ref);
+  if (!hasTwoPhaseAtT(f, T)) throw rangeError("T", T, `${f.Tmin} K to ${f.satTmax} K (the two-phase region) for a quality of ${f.id}`);
+  if (f.pseudoPure) {
+    // T(p, x) rises with p: bisection between the dew and bubble pressures at T.
+    let lo = f.pDew!.value(T), hi = f.pBubble!.value(T);
+    const Tof = (p: number) => { const TL = f.pBubble!.invert(p), TV = f.pDew!.invert(p); return TL + x * (TV - TL); };
+    for (let k = 0; k < 200 && hi - lo > 1e-14 * hi; k++) {
+      const mid = 0.5 * (lo + hi);
+      if (Tof(mid) > T) hi = mid; else lo = mid;
+    }
+    return twoPhaseState(f, saturationP(f, 0.5 * (lo + hi)), x, ref, off);
+  }
+  return twoPhaseState(f, saturationT(f, T), x, ref, off);
+}
+
+export function flashTS(f: Fluid, T: number, s: number, ref: ReferenceName = "native"): State {
+  checkT(f, T);
+  requireNumber("s", s, { allowNegative: true });
+  const off = referenceOffset(f, ref);
+  const target = s - off.ds;
+  let lo = 0, hi = Infinity, rho: number, liquidSide = false;
+  if (hasTwoPhaseAtT(f, T) && T < f.Tc) {
+    const sat = saturationT(f, T);
+    const t = tieLine(f, sat);
+    if (target >= t.sL && target <= t.sV) {
+      if (f.pseudoPure) return pseudoTwoPhaseAtT(f, T, (st) => -st.s, -s, ref, off);
+      return twoPhaseState(f, sat, (target - t.sL) / (t.sV - t.sL), ref, off);
+    }
+    if (target > t.sV) { hi = sat.rhoV; rho = sat.rhoV * 0.5; }
+    else { lo = sat.rhoL; rho = sat.rhoL * 1.01; liquidSide = true; }
+  } else {
+    rho = f.rhoc;
+  }
+  // Newton in ln ρ on s(T, ρ) = target, with (∂s/∂ln ρ)_T = −(∂p/∂T)_ρ / (ρ M).
+  const o = f.tmp;
+  for (let k = 0; k < MAX_ITER; k++) {
+    propertiesTRho(f.model, f.M, T, rho, o);
+    const F = o[S]! - target;
+    if (Math.abs(F) <= 1e-13 * (Math.abs(target) + f.R / f.M)) break;
+    const slope = -o[DPDT]! / (rho * f.M);
+    if (F > 0 === slope < 0) lo = Math.max(lo, rho); else hi = Math.min(hi, rho);
+    let next = slope !== 0 ? rho * Math.exp(-F / slope) : NaN;
+    if (!(next > lo && next < hi)) next = Number.isFinite(hi) ? (lo > 0 ? Math.sqrt(lo * hi) : hi * 0.5) : rho * 2;
+    if (Math.abs(next - rho) <= 1e-14 * rho) { rho = next; break; }
+    rho = next;
+    if (k === MAX_ITER - 1) throw convergenceError("entropy at fixed temperature", `T = ${T} K, s = ${s} J/(kg K) of ${f.id}`);
+  }
+  const st = singleState(f, T, rho, "liquid", ref, off);
+  if (st.p > f.pmax) throw rangeError("s", s, `values whose pressure at T = ${T} K stays below ${f.pmax} Pa for ${f.id}`);
+  st.phase = singlePhase(f, T, st.p, liquidSide);
+  return st;
+}
+
+export function flashTRho(f: Fluid, T: number, rhoMass: number, ref: ReferenceName = "native"): State {
+  checkT(f, T);
+  requireNumber("rho", rhoMass, { positive: true });
+  const off = referenceOffset(f, ref);
+  const rho = rhoMass / f.M;
+  if (hasTwoPhaseAtT(f, T) && T < f.Tc) {
+    const sat = saturationT(f, T);
+    if (rho < sat.rhoL && rho > sat.rhoV) {
+      if (f.pseudoPure) return pseudoTwoPhaseAtT(f, T, (st) => st.v, 1 / rhoMass, ref, off);
+      const x = (1 / rho - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+      return twoPhaseState(f, sat, x, ref, off);
+    }
+    const st = singleState(f, T, rho, rho >= sat.rhoL ? "liquid" : "vapour", ref, off);
+    if (st.p > f.pmax) throw rangeError("rho", rhoMass, `densities whose pressure at T = ${T} K stays below ${f.pmax} Pa for ${f.id}`);
+    return st;
+  }
+  const st = singleState(f, T, rho, "vapour", ref, off);
+  if (!(st.p > 0) || st.p > f.pmax) throw rangeError("rho", rhoMass, `densities whose pressure at T = ${T} K lies between 0 and ${f.pmax} Pa for ${f.id}`);
+  st.phase = singlePhase(f, T, st.p, rho > f.rhoc);
+  return st;
+}
+
+/** The state from exactly two inputs in SI (T K, p Pa, rho kg/m³, v m³/kg, h J/kg, s J/(kg K), x). */
+export function flash(f: Fluid, inputs: Inputs, reference: ReferenceName | string = "native"): State {
+  const ref = checkReferenceName(reference);
+  const given = INPUT_NAMES.filter((k) => inputs[k] !== undefined);
+  for (const k of Object.keys(inputs)) {
+    if (!(INPUT_NAMES as readonly string[]).includes(k))
+      throw new DomeprintError("E_UNKNOWN_QUANTITY", `${k}: unknown quantity; allowed: ${INPUT_NAMES.join(", ")}`, { input: k, allowed: INPUT_NAMES.join(", ") });
+  }
+  if (given.length !== 2)
+    throw new DomeprintError("E_INPUT", `inputs = ${given.join(", ") || "none"}: exactly two are needed; allowed pairs: ${SUPPORTED_PAIRS.join("; ")}`, { input: "inputs", value: given, allowed: SUPPORTED_PAIRS.join("; ") });
+  const key = given.join(",");
+  const g = (k: InputName) => inputs[k]!;
+  switch (key) {
+    case "T,p": return flashTP(f, g("T"), g("p"), ref);
+    case "p,h": return flashPH(f, g("p"), g("h"), ref);
+    case "p,s": return flashPS(f, g("p"), g("s"), ref);
+    case "T,s": return flashTS(f, g("T"), g("s"), ref);
+    case "T,x": return flashTX(f, g("T"), g("x"), ref);
+    case "p,x": return flashPX(f, g("p"), g("x"), ref);
+    case "T,rho": return flashTRho(f, g("T"), g("rho"), ref);
+    case "T,v": {
+      const v = requireNumber("v", g("v"), { positive: true });
+      return flashTRho(f, g("T"), 1 / v, ref);
+    }
+    default:
+      throw new DomeprintError("E_UNSUPPORTED", `inputs = ${key}: this pair is not supported; allowed pairs: ${SUPPORTED_PAIRS.join("; ")}`, { input: "inputs", value: key, allowed: SUPPORTED_PAIRS.join("; ") });
+  }
+}

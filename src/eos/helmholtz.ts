@@ -1,0 +1,73 @@
+// The reduced Helmholtz energy α(δ, τ) = α⁰ + αʳ of one fluid, assembled from its term tables.
+// Evaluation writes into two reusable typed arrays, so the hot path allocates nothing.
+import type { FluidFile, IdealTerm, ResidualTerm } from "./fluid-file.js";
+import type { IdealKernel, ResidualKernel } from "./terms/kernel.js";
+import { powerTerms } from "./terms/power.js";
+import { gaussianTerms } from "./terms/gaussian.js";
+import { gaussianRationalTerms } from "./terms/gaussian-rational.js";
+import { powerDoubleExpTerms } from "./terms/power-double-exp.js";
+import { nonanalyticTerms } from "./terms/nonanalytic.js";
+import { cp0Power, linearTau, logTau, planckEinstein, planckEinsteinGeneral, tauPower } from "./terms/ideal.js";
+
+function residualKernel(term: ResidualTerm): ResidualKernel {
+  switch (term.type) {
+    case "power": return powerTerms(term.rows, term.columns);
+    case "gaussian": return gaussianTerms(term.rows, term.columns);
+    case "gaussian-rational": return gaussianRationalTerms(term.rows, term.columns);
+    case "power-double-exp": return powerDoubleExpTerms(term.rows, term.columns);
+    case "nonanalytic": return nonanalyticTerms(term.rows, term.columns);
+  }
+}
+
+function idealKernel(term: IdealTerm, Tr: number): IdealKernel {
+  switch (term.type) {
+    case "lead":
+    case "offset": return linearTau(term.a1, term.a2);
+    case "log-tau": return logTau(term.a);
+    case "tau-power": return tauPower(term.rows, term.columns);
+    case "planck-einstein": return planckEinstein(term.rows, term.columns, "theta");
+    case "planck-einstein-kelvin": return planckEinstein(term.rows, term.columns, "theta_K", 1 / Tr);
+    case "planck-einstein-general": return planckEinsteinGeneral(term.rows, term.columns);
+    case "cp0-power": return cp0Power(term.rows, term.columns, term.T0, Tr);
+  }
+}
+
+export interface Helmholtz {
+  /** Reducing temperature [K] and molar density [mol/m³]. */
+  readonly Tr: number;
+  readonly rhor: number;
+  /** The equation's own molar gas constant [J/(mol K)]. */
+  readonly R: number;
+  /** Residual part after evalResidual: αʳ, δαʳ_δ, τααʳ_τ, δ²αʳ_δδ, τ²αʳ_ττ, δταʳ_δτ. */
+  readonly r: Float64Array;
+  /** Ideal part after evalIdeal (without ln δ): α⁰, τα⁰_τ, τ²α⁰_ττ. */
+  readonly i: Float64Array;
+  evalResidual(tau: number, delta: number): void;
+  evalIdeal(tau: number): void;
+}
+
+export function buildHelmholtz(f: FluidFile): Helmholtz {
+  const Tr = f.reducing.T;
+  const residual = f.residual.map(residualKernel);
+  const ideal = f.ideal.map((t) => idealKernel(t, Tr));
+  const r = new Float64Array(6);
+  const i = new Float64Array(3);
+  const nr = residual.length, ni = ideal.length;
+  return {
+    Tr,
+    rhor: f.reducing.rho,
+    R: f.gasConstant,
+    r,
+    i,
+    evalResidual(tau, delta) {
+      r.fill(0);
+      const lnTau = Math.log(tau), lnDelta = Math.log(delta);
+      for (let k = 0; k < nr; k++) residual[k]!.add(tau, delta, lnTau, lnDelta, r);
+    },
+    evalIdeal(tau) {
+      i.fill(0);
+      const lnTau = Math.log(tau);
+      for (let k = 0; k < ni; k++) ideal[k]!.add(tau, lnTau, i);
+    },
+  };
+}

@@ -1,0 +1,136 @@
+// Two-phase boundary. Pure fluids: equal pressure and Gibbs energy of both phases (Newton in the two
+// densities, after Akasaka 2008). Pseudo-pure blends: bubble and dew pressure ancillaries, roots of the equation.
+import { convergenceError, DomeprintError, rangeError } from "../errors.js";
+import { densityTP } from "./density.js";
+import type { Fluid } from "./fluid.js";
+
+/** Both ends of a tie line: for pure fluids TL = TV and pL = pV; for pseudo-pure blends they differ by the glide. */
+export interface Saturation {
+  TL: number;
+  TV: number;
+  pL: number;
+  pV: number;
+  /** Molar densities [mol/m³] of the saturated (bubble) liquid and the saturated (dew) vapour. */
+  rhoL: number;
+  rhoV: number;
+}
+
+const MAX_ITER = 100;
+
+function checkT(f: Fluid, T: number): void {
+  if (T < f.Tmin - 1e-9) throw rangeError("T", T, `${f.Tmin} K (triple point) to ${f.Tc} K (critical point) for saturation of ${f.id}`, "E_BELOW_TRIPLE");
+  if (T > f.Tc) throw rangeError("T", T, `${f.Tmin} K to ${f.Tc} K (critical point) for saturation of ${f.id}`);
+}
+
+/** The tie line at T from reduced densities; the pressure is taken on the vapour side, which is exact to rounding at low T. */
+function satState(f: Fluid, T: number, dL: number, dV: number): Saturation {
+  const m = f.model;
+  m.evalResidual(m.Tr / T, dV);
+  const p = dV * m.rhor * m.R * T * (1 + m.r[1]!);
+  return { TL: T, TV: T, pL: p, pV: p, rhoL: dL * m.rhor, rhoV: dV * m.rhor };
+}
+
+/** Saturated liquid and vapour of a pure fluid at T, from ancillary or given starting densities. */
+function pureSaturationT(f: Fluid, T: number, guessL?: number, guessV?: number): Saturation {
+  const m = f.model, r = m.r, rr = m.rhor;
+  let dL = (guessL ?? f.rhoLiquid.value(T)) / rr;
+  let dV = (guessV ?? f.rhoVapour.value(T)) / rr;
+  const tau = m.Tr / T;
+  let best = Infinity, bestL = dL, bestV = dV;
+  for (let k = 0; k < MAX_ITER; k++) {
+    m.evalResidual(tau, dL);
+    const JL = dL * (1 + r[1]!), KL = r[1]! + r[0]! + Math.log(dL);
+    const JdL = 1 + 2 * r[1]! + r[3]!, KdL = (2 * r[1]! + r[3]! + 1) / dL;
+    m.evalResidual(tau, dV);
+    const JV = dV * (1 + r[1]!), KV = r[1]! + r[0]! + Math.log(dV);
+    const JdV = 1 + 2 * r[1]! + r[3]!, KdV = (2 * r[1]! + r[3]! + 1) / dV;
+    const dJ = JV - JL, dK = KV - KL;
+    // J of the liquid is a near-cancelling difference at low T; its rounding (≈1e-15·δL) bounds what can be reached.
+    const resid = Math.abs(dJ) / (Math.abs(JV) + 1e-15 * dL) + Math.abs(dK);
+    if (resid < best) { best = resid; bestL = dL; bestV = dV; }
+    if (resid <= 1e-14) return satState(f, T, dL, dV);
+    const det = JdV * KdL - JdL * KdV;
+    const stepL = (dK * JdV - dJ * KdV) / det;
+    const stepV = (dK * JdL - dJ * KdL) / det;
+    let gamma = 1;
+    let nL = dL + stepL, nV = dV + stepV;
+    // Keep both densities positive and ordered: halve the step rather than jump to the trivial solution.
+    for (let j = 0; j < 60 && !(nV > 0 && nL > nV && Number.isFinite(nL) && Number.isFinite(nV)); j++) {
+      gamma *= 0.5;
+      nL = dL + gamma * stepL;
+      nV = dV + gamma * stepV;
+    }
+    if (!(nV > 0 && nL > nV)) break;
+    // Newton converges quadratically: after a step this small the error left is far below rounding.
+    if (Math.abs(nL - dL) <= 1e-11 * dL && Math.abs(nV - dV) <= 1e-11 * dV) return satState(f, T, nL, nV);
+    dL = nL;
+    dV = nV;
+  }
+  if (best <= 1e-10) return satState(f, T, bestL, bestV);
+  throw convergenceError("saturation", `T = ${T} K of ${f.id}`);
+}
+
+/** Saturation at temperature T [K]. */
+export function saturationT(f: Fluid, T: number): Saturation {
+  checkT(f, T);
+  if (f.pseudoPure) {
+    const pL = f.pBubble!.value(T), pV = f.pDew!.value(T);
+    const rhoL = densityTP(f, T, pL, "liquid", f.rhoLiquid.value(T));
+    const rhoV = densityTP(f, T, pV, "vapour");
+    return { TL: T, TV: T, pL, pV, rhoL, rhoV };
+  }
+  if (T > f.satTmax) throw rangeError("T", T, `${f.Tmin} K to ${f.satTmax} K (the saturation solver stops ${+(f.Tc - f.satTmax).toPrecision(3)} K below the critical point) for ${f.id}`);
+  return pureSaturationT(f, T);
+}
+
+/** Pressure at the lowest saturation temperature and at the highest the solver reaches. */
+export function saturationPressureRange(f: Fluid): [number, number] {
+  if (f.pseudoPure) return [f.pDew!.value(f.Tmin), f.pc];
+  return [f.data.triple.pVapour, pureSaturationT(f, f.satTmax).pL];
+}
+
+/** Saturation at pressure p [Pa]: for blends, bubble liquid at T_bubble(p) and dew vapour at T_dew(p). */
+export function saturationP(f: Fluid, p: number): Saturation {
+  if (f.pseudoPure) {
+    if (p > f.pc) throw rangeError("p", p, `up to ${f.pc} Pa (critical pressure) for the two-phase region of ${f.id}`);
+    const TL = f.pBubble!.invert(p), TV = f.pDew!.invert(p);
+    if (TL < f.Tmin - 1e-9) throw rangeError("p", p, `from ${f.pBubble!.value(f.Tmin)} Pa (bubble pressure at ${f.Tmin} K) for ${f.id}`, "E_BELOW_TRIPLE");
+    const rhoL = densityTP(f, TL, p, "liquid", f.rhoLiquid.value(TL));
+    const rhoV = densityTP(f, TV, p, "vapour");
+    return { TL, TV, pL: p, pV: p, rhoL, rhoV };
+  }
+  const [pmin, pmaxSat] = saturationPressureRange(f);
+  if (p < pmin * (1 - 1e-9)) throw rangeError("p", p, `${pmin} Pa (triple point) to ${pmaxSat} Pa for saturation of ${f.id}`, "E_BELOW_TRIPLE");
+  if (p > pmaxSat) throw rangeError("p", p, `${pmin} Pa to ${pmaxSat} Pa for saturation of ${f.id} (close to the critical point the two phases merge)`);
+  // Newton on T with the Clausius–Clapeyron slope; the saturation densities carry over between steps.
+  let T = Math.min(Math.max(f.pSat!.invert(p), f.Tmin), f.satTmax);
+  let lo = f.Tmin, hi = f.satTmax;
+  let sat = pureSaturationT(f, T);
+  const m = f.model, r = m.r;
+  for (let k = 0; k < MAX_ITER; k++) {
+    const err = Math.log(sat.pL / p);
+    if (Math.abs(err) <= 2e-15) return sat;
+    if (err > 0) hi = T; else lo = T;
+    const tau = m.Tr / T;
+    m.evalResidual(tau, sat.rhoL / m.rhor);
+    const hL = r[2]! + r[1]!;
+    m.evalResidual(tau, sat.rhoV / m.rhor);
+    const hV = r[2]! + r[1]!;
+    // d ln p / dT = Δh / (T Δv p); the ideal-gas parts of h cancel between the phases.
+    const dh = m.R * T * (hV - hL);
+    const dv = 1 / sat.rhoV - 1 / sat.rhoL;
+    const slope = dh / (T * dv * sat.pL);
+    let next = T - err / slope;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    if (Math.abs(next - T) <= 1e-14 * T) return sat;
+    const prev = sat;
+    T = next;
+    try {
+      sat = pureSaturationT(f, T, prev.rhoL, prev.rhoV);
+    } catch (e) {
+      if (!(e instanceof DomeprintError)) throw e;
+      sat = pureSaturationT(f, T);
+    }
+  }
+  throw convergenceError("saturation", `p = ${p} Pa of ${f.id}`);
+}

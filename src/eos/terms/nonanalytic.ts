@@ -1,0 +1,62 @@
+// Nonanalytic terms n Δ^b δ ψ of the water (IAPWS-95) and CO2 equations, which reproduce the
+// critical-point behaviour; derivatives as given in the IAPWS-95 release (Table 5), scaled on output.
+import { columns, R_A, R_D, R_DD, R_DT, R_T, R_TT, type ResidualKernel } from "./kernel.js";
+
+/** Distance from δ = 1 below which δ is nudged: the derivatives hold (δ−1)^negative powers there. */
+const SINGULAR_GAP = 1e-10;
+
+export function nonanalyticTerms(rows: number[][], names: string[]): ResidualKernel {
+  const [n, a, b, beta, A, B, C, D] = columns(rows, names, ["n", "a", "b", "beta", "A", "B", "C", "D"]) as Float64Array[] as [
+    Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
+  const count = n.length;
+  return {
+    add(tau, deltaIn, _lnTau, _lnDelta, acc) {
+      let delta = deltaIn;
+      if (Math.abs(delta - 1) < SINGULAR_GAP) delta = 1 + SINGULAR_GAP;
+      const dm1 = delta - 1, tm1 = tau - 1;
+      const d2 = dm1 * dm1;
+      let f = 0, fD = 0, fT = 0, fDD = 0, fTT = 0, fDT = 0;
+      for (let i = 0; i < count; i++) {
+        const ai = a[i]!, bi = b[i]!, bei = beta[i]!, Ai = A[i]!, Bi = B[i]!, Ci = C[i]!, Di = D[i]!;
+        const p1 = Math.pow(d2, 1 / (2 * bei) - 1); // ((δ−1)²)^(1/(2β) − 1)
+        const theta = 1 - tau + Ai * p1 * d2;
+        const pa1 = Math.pow(d2, ai - 1);
+        let Delta = theta * theta + Bi * pa1 * d2;
+        if (Delta < 1e-300) Delta = 1e-300;
+        const psi = Math.exp(-Ci * d2 - Di * tm1 * tm1);
+        // Δ and its derivatives; (1/(δ−1))·∂Δ/∂δ is kept as `r` to avoid a 0/0 at δ = 1.
+        const r = Ai * theta * (2 / bei) * p1 + 2 * Bi * ai * pa1;
+        const dDelta = dm1 * r;
+        const ddDelta = r + d2 * (4 * Bi * ai * (ai - 1) * Math.pow(d2, ai - 2)
+          + 2 * Ai * Ai * (1 / (bei * bei)) * p1 * p1
+          + Ai * theta * (4 / bei) * (1 / (2 * bei) - 1) * Math.pow(d2, 1 / (2 * bei) - 2));
+        const Db = Math.pow(Delta, bi);
+        const Db1 = Db / Delta; // Δ^(b−1)
+        const Db2 = Db1 / Delta; // Δ^(b−2)
+        const dDb = bi * Db1 * dDelta;
+        const ddDb = bi * (Db1 * ddDelta + (bi - 1) * Db2 * dDelta * dDelta);
+        const tDb = -2 * theta * bi * Db1;
+        const ttDb = 2 * bi * Db1 + 4 * theta * theta * bi * (bi - 1) * Db2;
+        const dtDb = -Ai * bi * (2 / bei) * Db1 * dm1 * p1 - 2 * theta * bi * (bi - 1) * Db2 * dDelta;
+        const dPsi = -2 * Ci * dm1 * psi;
+        const ddPsi = (2 * Ci * d2 - 1) * 2 * Ci * psi;
+        const tPsi = -2 * Di * tm1 * psi;
+        const ttPsi = (2 * Di * tm1 * tm1 - 1) * 2 * Di * psi;
+        const dtPsi = 4 * Ci * Di * dm1 * tm1 * psi;
+        const ni = n[i]!;
+        f += ni * Db * delta * psi;
+        fD += ni * (Db * (psi + delta * dPsi) + dDb * delta * psi);
+        fDD += ni * (Db * (2 * dPsi + delta * ddPsi) + 2 * dDb * (psi + delta * dPsi) + ddDb * delta * psi);
+        fT += ni * delta * (tDb * psi + Db * tPsi);
+        fTT += ni * delta * (ttDb * psi + 2 * tDb * tPsi + Db * ttPsi);
+        fDT += ni * (Db * (tPsi + delta * dtPsi) + delta * dDb * tPsi + tDb * (psi + delta * dPsi) + dtDb * delta * psi);
+      }
+      acc[R_A]! += f;
+      acc[R_D]! += delta * fD;
+      acc[R_T]! += tau * fT;
+      acc[R_DD]! += delta * delta * fDD;
+      acc[R_TT]! += tau * tau * fTT;
+      acc[R_DT]! += delta * tau * fDT;
+    },
+  };
+}
