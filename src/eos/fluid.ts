@@ -30,8 +30,11 @@ export class Fluid {
   readonly rhoVapour: Ancillary;
   /** Highest temperature at which the two-phase solver is used [K]: 1 mK below the lower of the stated and the equation's own critical temperature. */
   readonly satTmax: number;
-  /** The equation's own critical temperature [K] (pure fluids). */
+  /** The equation's own critical temperature [K] and molar density [mol/m³] (pure fluids). */
   readonly TcEquation: number;
+  readonly rhocEquation: number;
+  /** A saturation state 2 K below the equation's critical point, the anchor of near-critical starting values. */
+  nearCriticalAnchor: { T: number; rhoL: number; rhoV: number } | undefined;
   /** Scratch vectors for solvers (never returned to callers). */
   readonly tmp = new Float64Array(PROP_SLOTS);
   readonly tmp2 = new Float64Array(PROP_SLOTS);
@@ -56,7 +59,9 @@ export class Fluid {
     this.pDew = a.pDew && buildAncillary(a.pDew);
     this.rhoLiquid = buildAncillary(a.rhoLiquid);
     this.rhoVapour = buildAncillary(a.rhoVapour);
-    this.TcEquation = this.pseudoPure ? this.Tc : equationCriticalPoint(this).T;
+    const crit = this.pseudoPure ? { T: this.Tc, rho: this.rhoc } : equationCriticalPoint(this);
+    this.TcEquation = crit.T;
+    this.rhocEquation = crit.rho;
     this.satTmax = this.pseudoPure ? this.Tc : Math.min(this.Tc, this.TcEquation) - 0.001;
   }
 }

@@ -25,16 +25,42 @@ function checkT(f: Fluid, T: number): void {
 /** The tie line at T from reduced densities; the pressure is taken on the vapour side, which is exact to rounding at low T. */
 function satState(f: Fluid, T: number, dL: number, dV: number): Saturation {
   const m = f.model;
+  // Equal densities solve the equations trivially; they are not a tie line.
+  if (!(dL > dV * (1 + 1e-9))) throw convergenceError("saturation", `T = ${T} K of ${f.id} (the phases merged)`);
   m.evalResidual(m.Tr / T, dV);
   const p = dV * m.rhor * m.R * T * (1 + m.r[1]!);
   return { TL: T, TV: T, pL: p, pV: p, rhoL: dL * m.rhor, rhoV: dV * m.rhor };
 }
 
+/** Width of the band below the equation's critical temperature where starting values come from critical scaling [K]. */
+const NEAR_CRITICAL_BAND = 2;
+
+/**
+ * Starting densities at T: the ancillaries, except close to the critical point, where ancillaries
+ * (often fitted to a slightly different T_c) can meet or cross. There the coexistence curve is scaled
+ * from a solved state 2 K below: half-width ∝ (T_c − T)^0.325, rectilinear diameter.
+ */
+function startingDensities(f: Fluid, T: number): [number, number] {
+  const Tc = f.TcEquation;
+  if (T < Tc - NEAR_CRITICAL_BAND) return [f.rhoLiquid.value(T), f.rhoVapour.value(T)];
+  if (!f.nearCriticalAnchor) {
+    const Ta = Tc - NEAR_CRITICAL_BAND;
+    const s = pureSaturationT(f, Ta, f.rhoLiquid.value(Ta), f.rhoVapour.value(Ta));
+    f.nearCriticalAnchor = { T: Ta, rhoL: s.rhoL, rhoV: s.rhoV };
+  }
+  const a = f.nearCriticalAnchor;
+  const t = Math.max(Tc - T, 0) / (Tc - a.T);
+  const half = 0.5 * (a.rhoL - a.rhoV) * Math.pow(t, 0.325);
+  const mid = f.rhocEquation + (0.5 * (a.rhoL + a.rhoV) - f.rhocEquation) * t;
+  return [mid + half, mid - half];
+}
+
 /** Saturated liquid and vapour of a pure fluid at T, from ancillary or given starting densities. */
 function pureSaturationT(f: Fluid, T: number, guessL?: number, guessV?: number): Saturation {
   const m = f.model, r = m.r, rr = m.rhor;
-  let dL = (guessL ?? f.rhoLiquid.value(T)) / rr;
-  let dV = (guessV ?? f.rhoVapour.value(T)) / rr;
+  if (guessL === undefined || guessV === undefined) [guessL, guessV] = startingDensities(f, T);
+  let dL = guessL / rr;
+  let dV = guessV / rr;
   const tau = m.Tr / T;
   let best = Infinity, bestL = dL, bestV = dV;
   for (let k = 0; k < MAX_ITER; k++) {
@@ -52,8 +78,11 @@ function pureSaturationT(f: Fluid, T: number, guessL?: number, guessV?: number):
     const det = JdV * KdL - JdL * KdV;
     const stepL = (dK * JdV - dJ * KdV) / det;
     const stepV = (dK * JdL - dJ * KdL) / det;
-    let gamma = 1;
-    let nL = dL + stepL, nV = dV + stepV;
+    // Near the critical point a full step can carry both densities onto the trivial solution δL = δV:
+    // no step may close more than a third of the gap between them.
+    const gap = dL - dV;
+    let gamma = Math.min(1, gap / (3 * Math.max(Math.abs(stepL), Math.abs(stepV), 1e-300)));
+    let nL = dL + gamma * stepL, nV = dV + gamma * stepV;
     // Keep both densities positive and ordered: halve the step rather than jump to the trivial solution.
     for (let j = 0; j < 60 && !(nV > 0 && nL > nV && Number.isFinite(nL) && Number.isFinite(nV)); j++) {
       gamma *= 0.5;
