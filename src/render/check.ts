@@ -139,8 +139,12 @@ function uniqueIds(at: string, items: { id: string }[]): Set<string> {
   return seen;
 }
 
+/** Ids the renderers write themselves; a layer taking one would make the SVG's ids ambiguous. */
+const RESERVED_ID = /^(clip-|domeprint-)/;
+
 function checkLayer(at: string, layer: Layer, clips: Set<string>): void {
   xmlId(`${at}.id`, layer.id);
+  if (RESERVED_ID.test(layer.id)) throw inputError(`${at}.id`, layer.id, "uses a prefix the renderers reserve", "an id not starting with clip- or domeprint-");
   if (typeof layer.label !== "string") throw inputError(`${at}.label`, layer.label, "not a string", "a layer name");
   layer.marks.forEach((mark, i) => checkMark(`${at}.marks[${i}]`, mark, clips));
 }
@@ -151,8 +155,13 @@ export function checkScene(scene: Scene): void {
   positive("scene.height", scene.height);
   nonNegative("scene.bleed", scene.bleed);
   colour("scene.background", scene.background);
-  if (typeof scene.fontFamily !== "string" || scene.fontFamily.trim() === "")
-    throw inputError("scene.fontFamily", scene.fontFamily, "empty", "a font family name");
+  // The PDF and PNG can only use the bundled face; an SVG naming another would print differently.
+  if (scene.fontFamily !== FONT_FAMILY)
+    throw new DomeprintError("E_UNSUPPORTED", `scene.fontFamily = ${show(scene.fontFamily)}: not a bundled family; allowed: ${FONT_FAMILY}`, {
+      input: "scene.fontFamily",
+      value: scene.fontFamily,
+      allowed: FONT_FAMILY,
+    });
   if (Number.isNaN(Date.parse(scene.meta.date))) throw inputError("scene.meta.date", scene.meta.date, "not a date", "an ISO 8601 date such as 2024-05-01");
   scene.clips.forEach((clip, i) => checkClip(`scene.clips[${i}]`, clip));
   const clips = uniqueIds("scene.clips", scene.clips);

@@ -41,7 +41,7 @@ function box(frame: PageFrame, inset: number): number[] {
 function documentInfo(scene: Scene): PDFKit.DocumentInfo {
   const { meta } = scene;
   const date = new Date(meta.date);
-  const info: PDFKit.DocumentInfo = { Title: meta.title, Creator: meta.creator, Producer: meta.creator, CreationDate: date, ModDate: date };
+  const info: PDFKit.DocumentInfo = { Title: meta.title, Creator: meta.creator, CreationDate: date, ModDate: date };
   if (meta.subject !== undefined) info.Subject = meta.subject;
   if (meta.author !== undefined) info.Author = meta.author;
   if (meta.keywords && meta.keywords.length > 0) info.Keywords = meta.keywords.join(", ");
@@ -49,8 +49,8 @@ function documentInfo(scene: Scene): PDFKit.DocumentInfo {
 }
 
 /**
- * pdfkit derives the file ID from the info dictionary, so fixing CreationDate (and Producer, which
- * would otherwise name pdfkit's version) makes the whole file a function of the scene.
+ * pdfkit stamps the current time unless CreationDate is given and derives the file ID from the info
+ * dictionary, so taking both dates from the scene makes the whole file a function of the scene.
  */
 function openDocument(scene: Scene, frame: PageFrame): Doc {
   const doc = new PDFDocument({

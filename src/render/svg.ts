@@ -60,7 +60,7 @@ function fillAttributes(fill: Fill | undefined): Attributes {
   return { fill: fill.colour, "fill-opacity": fill.opacity === undefined ? undefined : String(fill.opacity) };
 }
 
-export function pathData(points: number[], closed = false): string {
+function pathData(points: number[], closed = false): string {
   const pairs: string[] = [];
   for (let i = 0; i < points.length; i += 2) pairs.push(`${mm(points[i]!)} ${mm(points[i + 1]!)}`);
   return `M${pairs[0]}L${pairs.slice(1).join(" ")}${closed ? "Z" : ""}`;
@@ -90,9 +90,9 @@ function circleElement(mark: CircleMark): string {
   return element("circle", { ...shape, ...fillAttributes(mark.fill), ...strokeAttributes(mark.stroke), ...dataAttributes(mark.data) });
 }
 
-/** A CSS family list naming the scene's family first; characters that would break the list are dropped. */
+/** A CSS family list with a generic fallback for viewers that do not have the bundled face installed. */
 function familyList(family: string): string {
-  return `${family.replace(/[,;'"\\]/g, "").trim()}, sans-serif`;
+  return `${family}, sans-serif`;
 }
 
 function haloAttributes(mark: TextMark): Attributes {
@@ -134,8 +134,8 @@ function markElement(mark: Mark, family: string): string {
   }
 }
 
-function editorLayer(id: string, label: string, content: string, extra: Attributes = {}): string {
-  return element("g", { id, "inkscape:groupmode": "layer", "inkscape:label": label, ...extra }, content);
+function editorLayer(id: string, label: string, content: string): string {
+  return element("g", { id, "inkscape:groupmode": "layer", "inkscape:label": label }, content);
 }
 
 function layerElement(layer: Layer, family: string): string {

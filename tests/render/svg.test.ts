@@ -123,6 +123,7 @@ describe("renderSvg refuses scenes it cannot draw faithfully", () => {
     ["an odd point list", withMark({ kind: "path", points: [0, 0, 1] }), "E_INPUT", ".points"],
     ["a data key that cannot be an attribute", text({ data: { "bad key": "1" } }), "E_INPUT", ".data"],
     ["a character the font lacks", text({ text: "h₁ → h₂" }), "E_UNSUPPORTED", "U+2192"],
+    ["a font family that is not bundled", { ...testScene(), fontFamily: "Serif Display" }, "E_UNSUPPORTED", "Noto Sans"],
   ])("%s", (_name, bad, code, mention) => {
     const attempt = () => renderSvg(bad);
     expect(attempt).toThrow(DomeprintError);
