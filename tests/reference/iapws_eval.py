@@ -32,13 +32,17 @@ def fixture():
         T = rnd.uniform(273.16, 1273.0)
         rho = 10 ** rnd.uniform(-2, 3.03)
         reqs.append({"fluid": "water", "kind": "TD", "T": T, "rho": rho})
+    for T in [200, 220, 240, 260, 280, 300, 320, 340, 360, 380, 400]:
+        reqs.append({"fluid": "ammonia", "kind": "sat", "T": T})
+    for T, rho in [(250, 670), (300, 620), (300, 5), (350, 10), (400, 40), (450, 100), (500, 300), (600, 50)]:
+        reqs.append({"fluid": "ammonia", "kind": "TD", "T": T, "rho": rho})
     out = []
     for r in reqs:
         res = evaluate(r)
         if res is None or res["p"] <= 0 or res["p"] > 1e9:
             continue
         out.append({**r, **res})
-    return {"source": "Debian python3-iapws " + __import__("iapws").__version__ + " (IAPWS95 class)", "states": out}
+    return {"source": "Debian python3-iapws " + __import__("iapws").__version__ + " (IAPWS95 class; NH3 class: Tillner-Roth, Harms-Watzenberg & Baehr 1993)", "states": out}
 
 
 if __name__ == "__main__":
