@@ -72,11 +72,12 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
     if (Math.abs(next - T) <= 1e-13 * T) {
       // The bracket has closed on an end of the range: the target lies outside it.
-      if (T - Tlo <= 1e-9 * T && F > 0) {
+      const outside = Math.abs(F) > 1e-10 * scale;
+      if (T - Tlo <= 1e-9 * T && F > 0 && outside) {
         const code = atLow === "triple" ? "E_BELOW_TRIPLE" : "E_RANGE";
         throw rangeError(which, target, `${which} at p = ${p} Pa between its values at ${Tlo} K and ${Thi} K for ${f.id}`, code);
       }
-      if (Thi - T <= 1e-9 * T && F < 0) throw rangeError(which, target, `${which} at p = ${p} Pa up to its value at T_max = ${Thi} K for ${f.id}`);
+      if (Thi - T <= 1e-9 * T && F < 0 && outside) throw rangeError(which, target, `${which} at p = ${p} Pa up to its value at T_max = ${Thi} K for ${f.id}`);
       return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined) };
     }
     T = next;
@@ -93,6 +94,8 @@ function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: Re
   checkP(f, p);
   requireNumber(which, value, { allowNegative: true });
   const target = value - (which === "h" ? off.dh : off.ds);
+  const pLowest = saturationPressureRange(f)[0];
+  if (p < pLowest) return lowPressureVapour(f, p, which, value, target, ref, off);
   if (p < twoPhasePmax(f)) {
     const sat = saturationP(f, p);
     const t = tieLine(f, sat);
@@ -115,6 +118,23 @@ function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: Re
   }
   const r = solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
   return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
+}
+
+/**
+ * Below the lowest saturation pressure only vapour exists inside the range: for pure fluids below the triple
+ * point; for blends between the dew and bubble pressures at the lower limit, above the dew temperature.
+ */
+function lowPressureVapour(f: Fluid, p: number, which: Target, value: number, target: number, ref: ReferenceName, off: ReferenceOffset): State {
+  let Tlo = f.Tmin;
+  if (f.pseudoPure && p >= f.pDew!.value(f.Tmin)) Tlo = f.pDew!.invert(p);
+  const rhoLo = densityTP(f, Tlo, p, "vapour");
+  const o = f.tmp;
+  propertiesTRho(f.model, f.M, Tlo, rhoLo, o);
+  const yLo = which === "h" ? o[H]! : o[S]!;
+  if (target < yLo)
+    throw rangeError(which, value, `at p = ${p} Pa, values from ${+(yLo + (which === "h" ? off.dh : off.ds)).toPrecision(8)} (vapour at ${+Tlo.toFixed(3)} K; lower states are solid or below the equation's range) for ${f.id}`, "E_BELOW_TRIPLE");
+  const r = solveAtP(f, p, which, target, Tlo, f.Tmax, Tlo + 10, (T) => (T < f.Tc ? "vapour" : "single"), rhoLo, rhoLo);
+  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off);
 }
 
 // ---------------------------------------------------------------- pseudo-pure two-phase at fixed T

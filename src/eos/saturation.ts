@@ -114,7 +114,7 @@ export function saturationT(f: Fluid, T: number): Saturation {
 
 /** Pressure at the lowest saturation temperature and at the highest the solver reaches. */
 export function saturationPressureRange(f: Fluid): [number, number] {
-  if (f.pseudoPure) return [f.pDew!.value(f.Tmin), f.pc];
+  if (f.pseudoPure) return [f.pBubble!.value(f.Tmin), f.pc];
   return [f.data.triple.pVapour, pureSaturationT(f, f.satTmax).pL];
 }
 
