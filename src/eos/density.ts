@@ -57,9 +57,12 @@ function vapourRoot(f: Fluid, T: number, p: number, guess?: number, cap?: number
  */
 function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: number): number {
   const out = f.tmp2;
-  let rho = guess !== undefined && guess > 0 ? guess
-    : branch === "liquid" && T >= f.Tmin && T < f.Tc ? f.rhoLiquid.value(T)
-    : Math.min(p / (f.R * T), f.data.triple.rhoLiquid);
+  // Below T_c the liquid root lies above the saturated liquid density; starting there keeps the search
+  // out of the dome, where an isotherm can have stable islands with roots that are not the liquid.
+  const floor = branch === "liquid" && T >= f.Tmin && T < f.Tc
+    ? f.rhoLiquid.value(T) * (1 - 0.015 * f.data.ancillaries.rhoLiquid.maxErrorPercent) : 0;
+  let rho = guess !== undefined && guess > 0 ? Math.max(guess, floor)
+    : floor > 0 ? floor : Math.min(p / (f.R * T), f.data.triple.rhoLiquid);
   if (!(rho > 0) || !Number.isFinite(rho)) rho = f.rhoc;
   pressureAndSlope(f.model, T, rho, out);
   let lo = 0, hi = 0;
@@ -73,7 +76,7 @@ function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: numbe
     hi = rho;
     lo = rho;
     for (let k = 0; k < MAX_STEPS; k++) {
-      lo *= STEP_DOWN;
+      lo = lo * STEP_DOWN > floor || hi <= floor ? lo * STEP_DOWN : floor;
       pressureAndSlope(f.model, T, lo, out);
       if (!(out[1]! > 0) || out[0]! < p) break;
       hi = lo;
