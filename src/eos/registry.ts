@@ -62,7 +62,7 @@ function distance(a: string, b: string): number {
 export function suggestFluids(name: string): string[] {
   const idx = buildIndex();
   const q = foldName(name);
-  const scored = [...idx.entries()].map(([k, e]) => ({ id: e.id, d: k.includes(q) || q.includes(k) ? Math.min(1, distance(q, k)) : distance(q, k) }));
+  const scored = [...idx.entries()].map(([k, e]) => ({ id: e.id, d: k.startsWith(q) || q.startsWith(k) ? Math.min(1, distance(q, k)) : distance(q, k) }));
   scored.sort((a, b) => a.d - b.d);
   const out: string[] = [];
   for (const s of scored) {
