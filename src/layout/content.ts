@@ -1,0 +1,70 @@
+// What the layout engine is handed to set one sheet: the LineSet, saturation data, overlays, the fluid's
+// identity and safety data, units and the user's fields — all computed beforehand, none by the layout.
+
+import type { Overlay } from "../cycle/overlay.js";
+import type { LineSet } from "../isolines/index.js";
+import type { DisplayUnits } from "./display-units.js";
+
+/** Saturation pressures at one whole temperature of the display unit (°C or °F). */
+export interface SaturationTick {
+  /** The temperature in the display unit, a whole number. */
+  t: number;
+  /** Bubble and dew pressures [Pa]; equal for a pure fluid. */
+  pBubble: number;
+  pDew: number;
+}
+
+/** One row of the saturation table, SI throughout; p is taken at the bubble point for blends. */
+export interface SaturationRow {
+  T: number;
+  pBubble: number;
+  pDew: number;
+  rhoLiquid: number;
+  rhoVapour: number;
+  hLiquid: number;
+  hVapour: number;
+  sLiquid: number;
+  sVapour: number;
+}
+
+export interface FluidIdentity {
+  designation: string;
+  chemicalName: string;
+  formula: string;
+  /** ISO 817 class as recorded in the fluid file, or null where none is recorded. */
+  safetyClass: string | null;
+  safetySource: string;
+  safetyNote?: string;
+  /** Citation of the equation of state, as one line. */
+  citation: string;
+  equationTitle: string;
+  /** Range of validity of the equation, SI. */
+  validity: { Tmin: number; Tmax: number; pmax: number };
+  critical: { T: number; p: number };
+  /** A blend whose bubble and dew temperatures differ. */
+  glide: boolean;
+  /** Reference state for h and s, in words. */
+  reference: string;
+}
+
+export interface UserFields {
+  title?: string;
+  site?: string;
+  client?: string;
+  author?: string;
+  revision?: string;
+  notes?: string;
+}
+
+export interface SheetContent {
+  fluid: FluidIdentity;
+  lines: LineSet;
+  saturationScale: SaturationTick[];
+  saturationTable?: SaturationRow[];
+  overlays: Overlay[];
+  /** Gauge scale for a site: altitude [m] and the standard atmosphere there [Pa]. */
+  gauge?: { altitude: number; atmosphere: number };
+  units: DisplayUnits;
+  fields: UserFields;
+  stamp: { date: string; version: string; hash: string };
+}

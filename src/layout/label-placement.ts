@@ -1,0 +1,163 @@
+// The label placement optimiser: for each line, candidates along it scored by where the eye looks, how
+// crowded the spot is and how well it lines up with its family; chosen greedily, never overlapping.
+
+import type { FontWeight } from "../render/fonts.js";
+import { measureText } from "../render/fonts.js";
+import { boxInside, grow, type Box, type Rect } from "./geometry.js";
+import { labelCandidates, type Candidate } from "./label-candidates.js";
+import { SpatialGrid } from "./spatial-grid.js";
+
+export interface LabelRequest {
+  /** The line's id: its own segments never count against its label. */
+  owner: string;
+  family: string;
+  text: string;
+  sizePt: number;
+  weight: FontWeight;
+  /** Page polylines of the line, already cut to the plot frame. */
+  pieces: number[][];
+  /** Lines are served in this order (lower first): the dome before the isolines. */
+  priority: number;
+  /** Labels wanted on this line; the first is required, the rest where room allows. */
+  wanted: number;
+  /** Where a reader looks for this family's labels: 0 best … 1 worst, from page mm. */
+  prefer: (x: number, y: number) => number;
+  /** Labels of a family line up across their lines: in a row (same height) or a column (same x). */
+  align: "row" | "column";
+}
+
+export interface PlacedLabel {
+  request: LabelRequest;
+  x: number;
+  y: number;
+  rotate: number;
+  box: Box;
+}
+
+export interface PlacementReport {
+  /** Labels placed in all. */
+  placed: number;
+  /** Labels wanted but not placed (further labels on long lines included). */
+  dropped: number;
+  /** Lines that got no label at all. */
+  unlabelled: string[];
+}
+
+export interface PlacementInput {
+  requests: LabelRequest[];
+  /** The plot frame: labels stay inside it. */
+  region: Rect;
+  /** Clearance kept from the frame, in mm. */
+  inset: number;
+  /** Least gap between two labels' boxes, in mm. */
+  clearance: number;
+  /** Every drawn line, for crowding. */
+  lines: SpatialGrid;
+  /** Lines no label may cross (the dome, cycles) and boxes no label may overlap (panels, markers). */
+  obstacles: SpatialGrid;
+  /** Owners in `obstacles` whose segments labels must avoid. */
+  hardOwners: ReadonlySet<string>;
+  halo: number;
+}
+
+/** Candidate spacing along a line, in mm: fine enough to find gaps, coarse enough to stay fast. */
+const STEP = 1.5;
+
+const WEIGHT = { prefer: 4, crowding: 0.6, alignment: 1.2, steep: 0.5 } as const;
+
+interface Scored {
+  candidate: Candidate;
+  score: number;
+}
+
+function shapeOf(request: LabelRequest, halo: number) {
+  const metrics = measureText(request.text, request.sizePt, request.weight);
+  return { ...metrics, pad: halo };
+}
+
+export class LabelPlacer {
+  private readonly placed: PlacedLabel[] = [];
+  private readonly boxes: SpatialGrid;
+  private readonly familyAnchors = new Map<string, number[]>();
+
+  constructor(private readonly input: PlacementInput) {
+    this.boxes = new SpatialGrid(10);
+  }
+
+  private feasible(c: Candidate, request: LabelRequest): boolean {
+    const { input } = this;
+    if (!boxInside(c.box, input.region, input.inset)) return false;
+    if (this.boxes.hitsBox(grow(c.box, input.clearance))) return false;
+    if (input.obstacles.hitsBox(c.box)) return false;
+    return !input.obstacles.hitsOwners(c.box, input.hardOwners, request.owner);
+  }
+
+  private score(c: Candidate, request: LabelRequest): number {
+    const { input } = this;
+    const crowding = Math.min(input.lines.segmentOwners(c.box, request.owner).size, 6);
+    const anchors = this.familyAnchors.get(request.family) ?? [];
+    const along = request.align === "row" ? c.y : c.x;
+    const span = request.align === "row" ? input.region.height : input.region.width;
+    const alignment = anchors.length === 0 ? 0 : Math.min(...anchors.map((a) => Math.abs(a - along))) / span;
+    const steep = Math.max(0, Math.abs(c.rotate) - 60) / 30;
+    return WEIGHT.prefer * request.prefer(c.x, c.y) + WEIGHT.crowding * crowding + WEIGHT.alignment * Math.min(alignment * 4, 1) + WEIGHT.steep * steep;
+  }
+
+  private best(request: LabelRequest, candidates: Candidate[], extraScore?: (c: Candidate) => number): Scored | undefined {
+    let best: Scored | undefined;
+    for (const candidate of candidates) {
+      if (!this.feasible(candidate, request)) continue;
+      const score = this.score(candidate, request) + (extraScore ? extraScore(candidate) : 0);
+      if (!best || score < best.score) best = { candidate, score };
+    }
+    return best;
+  }
+
+  private commit(request: LabelRequest, c: Candidate): void {
+    this.placed.push({ request, x: c.x, y: c.y, rotate: c.rotate, box: c.box });
+    this.boxes.addBox(request.owner, c.box);
+    const anchors = this.familyAnchors.get(request.family) ?? [];
+    anchors.push(request.align === "row" ? c.y : c.x);
+    this.familyAnchors.set(request.family, anchors);
+  }
+
+  /** First every line's one required label (priority order), then further labels on long lines. */
+  run(): { labels: PlacedLabel[]; report: PlacementReport } {
+    const requests = [...this.input.requests].sort((a, b) => a.priority - b.priority);
+    const candidates = new Map<LabelRequest, Candidate[]>();
+    const first = new Map<LabelRequest, Candidate>();
+    const unlabelled: string[] = [];
+    for (const request of requests) {
+      const list = labelCandidates(request.pieces, shapeOf(request, this.input.halo), STEP);
+      candidates.set(request, list);
+      const chosen = this.best(request, list);
+      if (chosen) {
+        this.commit(request, chosen.candidate);
+        first.set(request, chosen.candidate);
+      } else unlabelled.push(`${request.family} ${request.text}`);
+    }
+    let dropped = unlabelled.length;
+    for (const request of requests) {
+      const taken = first.get(request);
+      for (let k = 1; k < request.wanted; k++) {
+        if (!taken) {
+          dropped++;
+          continue;
+        }
+        const list = candidates.get(request)!;
+        const mine = this.placed.filter((p) => p.request === request);
+        // Further labels keep well away from this line's others, so each part of a long line gets one.
+        const distance = (c: Candidate) => Math.min(...mine.map((p) => Math.hypot(p.x - c.x, p.y - c.y)));
+        const far = list.filter((c) => distance(c) > 0.3 * Math.max(this.input.region.width, this.input.region.height));
+        const chosen = this.best(request, far);
+        if (chosen) this.commit(request, chosen.candidate);
+        else dropped++;
+      }
+    }
+    return { labels: this.placed, report: { placed: this.placed.length, dropped, unlabelled } };
+  }
+}
+
+export function placeLabels(input: PlacementInput): { labels: PlacedLabel[]; report: PlacementReport } {
+  return new LabelPlacer(input).run();
+}

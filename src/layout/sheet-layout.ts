@@ -1,0 +1,167 @@
+// Composes one sheet's Scene from its content: grid, lines, overlays, labels placed by the optimiser,
+// axes, frame and panels, in page mm, with machine-readable metadata for scripts that read the SVG.
+
+import { FONT_FAMILY } from "../render/fonts.js";
+import { axesMarks } from "./axes.js";
+import { axisTicks } from "./axis-ticks.js";
+import type { SheetContent } from "./content.js";
+import { box, rectBox } from "./geometry.js";
+import { gridMarks } from "./grid.js";
+import { placeLabels, type PlacementReport } from "./label-placement.js";
+import { labelPreference } from "./label-preference.js";
+import { drawnLines, labelRequests, lineLayers } from "./line-marks.js";
+import { rect, text } from "./marks.js";
+import { sceneMeta } from "./sheet-meta.js";
+import { overlayMarks } from "./overlay-marks.js";
+import { drawPanel } from "./panel.js";
+import { arrangePanels } from "./panel-arrangement.js";
+import type { PagePlan } from "./plan.js";
+import { chartScales } from "./scales.js";
+import type { Layer, Mark, Scene, Stroke } from "./scene.js";
+import { cautionPanel, keyEntries, keyPanel, overlayPanels, saturationTablePanel, sourcePanel, titlePanel } from "./sheet-panels.js";
+import { SpatialGrid } from "./spatial-grid.js";
+import { FAMILIES, type Family, type Style } from "./style.js";
+import { MIN_TYPE_PT, sizesFor } from "./sizes.js";
+import { textWidth } from "./text.js";
+
+export interface SheetReport {
+  labels: PlacementReport;
+  pointLabels: { placed: number; dropped: number };
+  omitted: string[];
+  panelPt: number;
+}
+
+export interface LaidOutSheet {
+  scene: Scene;
+  report: SheetReport;
+}
+
+/** Rows of the saturation table at a step of whole display degrees, `thinning` times the base step. */
+function tableRows(content: SheetContent, thinning: number) {
+  const rows = content.saturationTable ?? [];
+  return rows.filter((_, i) => i % thinning === 0);
+}
+
+function familyStrokes(style: Style, plan: PagePlan): Record<Family, Stroke> {
+  return Object.fromEntries(FAMILIES.map((f) => [f, plan.sizes.stroke(style.lines[f])])) as Record<Family, Stroke>;
+}
+
+function panelStyle(style: Style, plan: PagePlan) {
+  return {
+    pt: plan.sizes.pt(style.type.panel),
+    titlePt: plan.sizes.pt(style.type.panelTitle),
+    ink: style.page.ink,
+    muted: style.page.muted,
+    fill: style.panels.fill,
+    stroke: plan.sizes.stroke(style.panels.stroke),
+    titleFill: style.panels.titleFill,
+    titleInk: style.panels.titleInk,
+    accent: style.panels.accent,
+    stripe: style.panels.stripe,
+    padding: plan.sizes.mm(style.panels.padding),
+  };
+}
+
+export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style): LaidOutSheet {
+  const { sizes } = plan;
+  const { units, fluid } = content;
+  const scales = chartScales(content.lines.window, plan.plot);
+  const ticks = axisTicks(scales, units, plan, content.saturationScale, fluid.glide, sizes.mm(style.grid.spacing), content.gauge?.atmosphere);
+  const strokes = familyStrokes(style, plan);
+  const drawn = drawnLines(content.lines, scales);
+
+  // Panels first: their rectangles are obstacles for everything placed later.
+  const families = new Set(drawn.map((d) => d.family));
+  const pStyle = panelStyle(style, plan);
+  const arrangement = arrangePanels(
+    {
+      fixed: [titlePanel(content), keyPanel(keyEntries(families, units, strokes, fluid.glide)), cautionPanel(fluid), ...overlayPanels(content.overlays), sourcePanel(content)],
+      ...(content.saturationTable ? { table: (thinning: number) => saturationTablePanel(tableRows(content, thinning), units, content.gauge?.atmosphere ?? 101325, fluid.glide) } : {}),
+    },
+    plan.panels,
+    plan.gap,
+    pStyle,
+    plan.arrangement,
+  );
+
+  const obstacles = new SpatialGrid(10);
+  for (const p of arrangement.placed) obstacles.addBox(p.panel.id, rectBox(p.rect));
+  const hardOwners = new Set<string>();
+  for (const d of drawn) {
+    if (d.family !== "dome") continue;
+    hardOwners.add(d.owner);
+    for (const piece of d.pieces) obstacles.addPolyline(d.owner, piece);
+  }
+
+  const haloMm = sizes.mm(style.labels.halo);
+  const labelPt = sizes.pt(style.type.lineLabel);
+  const critical = content.lines.critical;
+  const criticalMarks: Mark[] = [];
+  const cx = scales.x(critical.h), cy = scales.y(critical.p);
+  const { frame } = scales;
+  if (cx >= frame.x && cx <= frame.x + frame.width && cy >= frame.y && cy <= frame.y + frame.height) {
+    const r = sizes.mm(style.critical.radius);
+    criticalMarks.push({ kind: "circle", cx, cy, r, fill: { colour: style.critical.colour }, data: { quantity: "critical-point", T: String(critical.T), p: String(critical.p), h: String(critical.h) } });
+    obstacles.addBox("critical", box(cx, cy, r + haloMm, r + haloMm));
+  }
+
+  const overlay = overlayMarks(
+    content.overlays,
+    scales,
+    { colours: style.cycles.colours, width: sizes.mm(style.cycles.width), marker: sizes.mm(style.cycles.marker), pointsDash: style.cycles.pointsDash.map(sizes.mm), labelPt: sizes.pt(style.type.lineLabel + 1), background: style.page.background, halo: haloMm },
+    obstacles,
+  );
+  for (const owner of overlay.owners) hardOwners.add(owner);
+
+  const lines = new SpatialGrid(8);
+  for (const d of drawn) for (const piece of d.pieces) lines.addPolyline(d.owner, piece);
+  const requests = labelRequests(drawn, units, fluid.glide, { sizePt: labelPt, weight: style.labels.weight, perLine: style.labels.perLine }, plan.plot, labelPreference(drawn, plan.plot));
+  const placed = placeLabels({ requests, region: plan.plot, inset: sizes.mm(0.8), clearance: sizes.mm(style.labels.clearance), lines, obstacles, hardOwners, halo: haloMm });
+  const labelMarks: Mark[] = placed.labels.map((l) =>
+    text(l.x, l.y, l.request.text, l.request.sizePt, style.labelInk[l.request.family as Family], {
+      anchor: "middle",
+      baseline: "middle",
+      rotate: Math.round(l.rotate * 100) / 100,
+      weight: l.request.weight,
+      halo: { colour: style.page.background, width: haloMm },
+      data: { family: l.request.family },
+    }),
+  );
+
+  const frameStroke = sizes.stroke(style.frame);
+  const axisInk = { ink: style.page.ink, stroke: frameStroke };
+  const layers: Layer[] = [
+    { id: "grid", label: "Reading grid", marks: gridMarks(ticks, scales, sizes.stroke(style.grid.major), sizes.stroke(style.grid.minor)) },
+    ...lineLayers(drawn, strokes),
+    { id: "critical-point", label: "Critical point", marks: criticalMarks },
+    { id: "cycles", label: "Cycles and readings", marks: overlay.marks },
+    { id: "labels", label: "Line labels", marks: labelMarks },
+    { id: "frame", label: "Plot frame", marks: [rect(frame.x, frame.y, frame.width, frame.height, undefined, frameStroke)] },
+    { id: "axes", label: "Axes and scales", marks: axesMarks(ticks, scales, units, plan, axisInk, { glide: fluid.glide, ...(content.gauge ? { altitude: content.gauge.altitude } : {}) }) },
+    { id: "panels", label: "Panels", marks: arrangement.placed.flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height)) },
+  ];
+  const scene: Scene = {
+    width: plan.width,
+    height: plan.height,
+    bleed: 0,
+    cropMarks: false,
+    background: style.page.background,
+    fontFamily: FONT_FAMILY,
+    clips: [],
+    layers: layers.filter((l) => l.marks.length > 0),
+    meta: sceneMeta(content, scales, units, style, ticks),
+  };
+  return {
+    scene,
+    report: { labels: placed.report, pointLabels: { placed: overlay.placed, dropped: overlay.dropped }, omitted: arrangement.omitted, panelPt: arrangement.style.pt },
+  };
+}
+
+/** Width the panels need for a saturation table at the smallest type the arrangement may use. */
+export function panelMinWidth(style: Style, page: { width: number; height: number }, glide: boolean): number {
+  const sizes = sizesFor(style, page);
+  const columns = glide ? 11 : 9;
+  // The widest cells are five-figure numbers with a sign ("−1234.5", "1.2345"), plus a two-digit gap.
+  const cell = textWidth("\u22121234.500", MIN_TYPE_PT);
+  return columns * cell + 2 * sizes.mm(style.panels.padding);
+}

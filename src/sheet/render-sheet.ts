@@ -1,0 +1,104 @@
+// renderSheet: options in, the finished sheet out as SVG, PDF, PNG and JSON buffers, with the layout's
+// report (labels placed and dropped). Plans the page, asks the engine for data, lays out, renders.
+
+import { createHash } from "node:crypto";
+import { readFileSync } from "node:fs";
+import { lineSetToJson } from "../isolines/index.js";
+import type { SheetContent } from "../layout/content.js";
+import { displayUnits } from "../layout/display-units.js";
+import { resolvePaper } from "../layout/paper.js";
+import { planPage } from "../layout/plan.js";
+import type { Scene } from "../layout/scene.js";
+import { layoutSheet, panelMinWidth, type SheetReport } from "../layout/sheet-layout.js";
+import type { Style } from "../layout/style.js";
+import { loadStyle } from "../layout/style-file.js";
+import { renderPdf } from "../render/pdf.js";
+import { renderPng } from "../render/png.js";
+import { renderSvg } from "../render/svg.js";
+import { atmosphereAt } from "../units/index.js";
+import { engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
+import { getFluid } from "../eos/index.js";
+import { checkSheetOptions, type CheckedSheetOptions, type Format, type SheetOptions } from "./options.js";
+
+export const VERSION: string = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
+
+export interface RenderedSheet {
+  svg?: Buffer;
+  pdf?: Buffer;
+  png?: Buffer;
+  json?: Buffer;
+  scene: Scene;
+  report: SheetReport;
+  /** The sheet's file name stem, e.g. "R-717_A3_landscape". */
+  name: string;
+}
+
+/** Canonical JSON: keys sorted, so the same inputs always hash alike. */
+function canonical(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonical).join(",")}]`;
+  if (value && typeof value === "object")
+    return `{${Object.keys(value as object)
+      .sort()
+      .filter((k) => (value as Record<string, unknown>)[k] !== undefined)
+      .map((k) => `${JSON.stringify(k)}:${canonical((value as Record<string, unknown>)[k])}`)
+      .join(",")}}`;
+  return JSON.stringify(value);
+}
+
+/** The first 12 hex digits of SHA-256 over everything that decides what the sheet shows. */
+export function inputsHash(parts: Record<string, unknown>): string {
+  return createHash("sha256").update(canonical(parts)).digest("hex").slice(0, 12);
+}
+
+/** Table rows every 5 °C (10 °F); the panel keeps every n-th of them as room allows. */
+const TABLE_STEP = { si: 5, ip: 10 } as const;
+
+function fileStem(designation: string, paper: string, orientation: string): string {
+  return `${designation}_${paper}_${orientation}`.replace(/[^A-Za-z0-9._-]+/g, "-");
+}
+
+export async function renderSheet(options: SheetOptions): Promise<RenderedSheet> {
+  const o: CheckedSheetOptions = checkSheetOptions(options);
+  const style: Style = typeof options.style === "object" ? options.style : loadStyle(options.style);
+  const units = displayUnits(o.units, o.pressure);
+  const orientation = o.orientation ?? style.defaults.orientation;
+  const paper = resolvePaper(o.paper ?? style.defaults.paper, orientation);
+  const table = o.saturationTable ?? style.defaults.saturationTable;
+  const fluid = getFluid(o.fluid);
+  const glide = hasGlide(fluid);
+  const plan = planPage({
+    page: paper,
+    style,
+    gauge: o.gauge,
+    glide,
+    ...(table ? { panelMinWidth: panelMinWidth(style, paper, glide) } : {}),
+    ...(o.margin !== undefined ? { margin: o.margin } : {}),
+  });
+  const data = engineData(fluid, o.reference, units, plan.plot);
+  const identity = fluidIdentity(data.fluid, data.reference);
+  const atmosphere = atmosphereAt(o.altitude);
+  const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined }, paper, reference: data.reference });
+  const content: SheetContent = {
+    fluid: identity,
+    lines: data.lines,
+    saturationScale: saturationTicks(data.fluid, data.lines, units),
+    ...(table ? { saturationTable: saturationRows(data.fluid, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
+    overlays: o.overlays,
+    ...(o.gauge ? { gauge: { altitude: o.altitude, atmosphere } } : {}),
+    units,
+    fields: o.fields,
+    stamp: { date: o.date, version: VERSION, hash },
+  };
+  const laid = layoutSheet(plan, content, style);
+  const scene: Scene = { ...laid.scene, bleed: o.bleed, cropMarks: o.cropMarks };
+  const out: RenderedSheet = { scene, report: laid.report, name: fileStem(identity.designation, paper.name, orientation) };
+  const wants = (f: Format) => o.formats.includes(f);
+  if (wants("svg")) out.svg = Buffer.from(renderSvg(scene), "utf8");
+  if (wants("pdf")) out.pdf = await renderPdf(scene, { cmyk: o.cmyk });
+  if (wants("png")) out.png = renderPng(scene, { dpi: o.dpi });
+  if (wants("json")) {
+    const json = { format: "domeprint-sheet-data/1", sheet: scene.meta.attributes, fluid: identity, report: laid.report, saturationTable: content.saturationTable ?? null, lines: lineSetToJson(data.lines) };
+    out.json = Buffer.from(`${JSON.stringify(json)}\n`, "utf8");
+  }
+  return out;
+}
