@@ -23,6 +23,7 @@ const binaryFileSchema = z.strictObject({
   pairs: z.array(z.strictObject({
     fluids: z.tuple([z.string(), z.string()]),
     reducing: z.strictObject({ betaT: pos, gammaT: pos, betaV: pos, gammaV: pos }).nullable(),
+    reducingFit: z.strictObject({ xi_K: num, zeta_m3_mol: num, method: z.string() }).optional(),
     F: num,
     departure: z.string().nullable(),
     source: z.string(),
@@ -109,6 +110,18 @@ export function binaryPair(a: Fluid, b: Fluid, rule: EstimateRule = "linear"): B
   const departure: DepartureData | null = dep && entry.F !== 0 ? { form: dep.form, columns: dep.columns, rows: dep.rows } : null;
   const unpublished = entry.source === "Unpublished";
   if (entry.reducing === null) {
+    if (entry.reducingFit) {
+      // T_r = Σ xᵢTᵢ + Σ xᵢxⱼξ, v_r = Σ xᵢvᵢ + Σ xᵢxⱼζ written in the GERG form (β = 1, symmetric in the order).
+      const lin = linearRule(a, b);
+      const Ta = a.model.Tr, Tb = b.model.Tr, va = 1 / a.model.rhor, vb = 1 / b.model.rhor;
+      const fit = entry.reducingFit;
+      return {
+        betaT: 1, gammaT: lin.gammaT * (1 + fit.xi_K / (Ta + Tb)),
+        betaV: 1, gammaV: lin.gammaV * (1 + fit.zeta_m3_mol / (va + vb)),
+        F: entry.F, departure, source: entry.source,
+        estimated: `reducing parameters not in the dataset; ξ = ${fit.xi_K} K, ζ = ${fit.zeta_m3_mol} m³/mol fitted by domeprint to a pseudo-pure blend equation; departure function and F from ${entry.source}`,
+      };
+    }
     return { ...estimate(a, b, rule), F: entry.F, departure, source: entry.source,
       estimated: `reducing parameters not in the dataset (${RULE_WORDS[rule]}); departure function and F from ${entry.source}` };
   }
