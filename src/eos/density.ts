@@ -14,6 +14,14 @@ const STEP_UP = 1.05, STEP_DOWN = 1 / 1.25, MAX_STEPS = 400;
 const TURNOVER = 1.05;
 
 /**
+ * A density [mol/m³] safely below the saturated liquid at T (the ancillary less 1.5 × its stated error);
+ * 0 above T_c. Liquid roots lie above it; roots below it at T < T_c are in-dome wiggles of the equation.
+ */
+export function liquidFloor(f: Fluid, T: number): number {
+  return T >= f.Tmin && T < f.Tc ? f.rhoLiquid.value(T) * (1 - 0.015 * f.data.ancillaries.rhoLiquid.maxErrorPercent) : 0;
+}
+
+/**
  * Molar density [mol/m³] at T [K], p [Pa] on the given branch, starting from `guess` (mol/m³, optional).
  * `cap` bounds the vapour branch from above (e.g. the saturated vapour density), when known.
  */
@@ -59,8 +67,7 @@ function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: numbe
   const out = f.tmp2;
   // Below T_c the liquid root lies above the saturated liquid density; starting there keeps the search
   // out of the dome, where an isotherm can have stable islands with roots that are not the liquid.
-  const floor = branch === "liquid" && T >= f.Tmin && T < f.Tc
-    ? f.rhoLiquid.value(T) * (1 - 0.015 * f.data.ancillaries.rhoLiquid.maxErrorPercent) : 0;
+  const floor = branch === "liquid" ? liquidFloor(f, T) : 0;
   let rho = guess !== undefined && guess > 0 ? Math.max(guess, floor)
     : floor > 0 ? floor : Math.min(p / (f.R * T), f.data.triple.rhoLiquid);
   if (!(rho > 0) || !Number.isFinite(rho)) rho = f.rhoc;

@@ -1,9 +1,9 @@
 // Flashes: the state from any supported pair of inputs, with phase identification.
 // Single-phase solves are nested one-dimensional Newton iterations, each bracketed and capped.
 import { convergenceError, DomeprintError, inputError, rangeError, requireNumber } from "../errors.js";
-import { densityTP, type Branch } from "./density.js";
+import { densityTP, liquidFloor, type Branch } from "./density.js";
 import type { Fluid } from "./fluid.js";
-import { CP, DPDT, H, propertiesTRho, S } from "./properties.js";
+import { CP, CV, DPDRHO, DPDT, H, P, propertiesTRho, S } from "./properties.js";
 import { checkReferenceName, referenceOffset, type ReferenceName, type ReferenceOffset } from "./reference.js";
 import { saturationP, saturationPressureRange, saturationT, type Saturation } from "./saturation.js";
 import { singlePhase, singleState, tieLine, twoPhaseState, type State } from "./state.js";
@@ -85,6 +85,45 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
   throw convergenceError(`${which} at fixed pressure`, `p = ${p} Pa, ${which} = ${target} of ${f.id}`);
 }
 
+/**
+ * Fast path for single-phase (p, h) and (p, s): Newton in (T, ln ρ) on p(T, ρ) = p and h or s = target,
+ * one property evaluation per step. Accepted only if it converges inside [Tlo, Thi] on a stable branch
+ * with ρ in [rhoMin, rhoMax]; otherwise undefined, and the caller uses the bracketed nested solver.
+ */
+function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: number, rho0: number,
+  Tlo: number, Thi: number, rhoMin: number, rhoMax: number, liquid = false): { T: number; rho: number } | undefined {
+  const o = f.tmp, M = f.M;
+  let T = Math.min(Math.max(T0, Tlo), Thi), rho = rho0;
+  for (let k = 0; k < 25; k++) {
+    propertiesTRho(f.model, M, T, rho, o);
+    const dpdr = o[DPDRHO]!, dpdT = o[DPDT]!;
+    if (!(dpdr > 0)) return undefined;
+    const F1 = o[P]! - p;
+    const y = which === "h" ? o[H]! : o[S]!;
+    const F2 = y - target;
+    const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
+    if (Math.abs(F1) <= 1e-12 * p && Math.abs(F2) <= 1e-13 * scale) {
+      const ok = T >= Tlo - 1e-9 * T && T <= Thi + 1e-9 * T && rho >= rhoMin && rho <= rhoMax && (!liquid || rho >= liquidFloor(f, T));
+      return ok ? { T, rho } : undefined;
+    }
+    // Jacobian in (T, ln ρ), ρ molar; h and s per unit mass.
+    const a = dpdT, b = dpdr * rho;
+    const c = which === "h" ? o[CV]! + dpdT / (rho * M) : o[CV]! / T;
+    const d = which === "h" ? (dpdr - (T * dpdT) / rho) / M : -dpdT / (rho * M);
+    const det = a * d - b * c;
+    if (!(Math.abs(det) > 0)) return undefined;
+    let dT = (F1 * d - b * F2) / det;
+    let dl = (a * F2 - c * F1) / det;
+    const g = Math.min(1, (0.2 * T) / Math.max(Math.abs(dT), 1e-300), 0.5 / Math.max(Math.abs(dl), 1e-300));
+    dT *= g;
+    dl *= g;
+    T -= dT;
+    rho *= Math.exp(-dl);
+    if (!(T > 0.5 * Tlo && T < 1.5 * Thi)) return undefined;
+  }
+  return undefined;
+}
+
 /** The density branch for a single-phase state at pressure p above every saturation pressure. */
 function branchAbove(f: Fluid) {
   return (T: number): Branch => (T < Math.min(f.satTmax, f.Tc) ? "liquid" : "single");
@@ -107,16 +146,22 @@ function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: Re
       const cp = o[CP]!;
       const T0 = sat.TV + (which === "h" ? (target - yV) / cp : sat.TV * (Math.exp((target - yV) / cp) - 1));
       if (sat.TV >= f.Tmax) throw rangeError(which, value, `at most the saturated vapour value at p = ${p} Pa for ${f.id} (T_max reached)`);
-      const r = solveAtP(f, p, which, target, sat.TV, f.Tmax, T0, (T) => (T < f.Tc ? "vapour" : "single"), sat.rhoV, sat.rhoV);
+      const T0c = Math.min(Math.max(T0, sat.TV), f.Tmax);
+      const r = newtonAtP(f, p, which, target, T0c, sat.rhoV * (sat.TV / T0c), sat.TV, f.Tmax, 0, sat.rhoV * (1 + 1e-9))
+        ?? solveAtP(f, p, which, target, sat.TV, f.Tmax, T0, (T) => (T < f.Tc ? "vapour" : "single"), sat.rhoV, sat.rhoV);
       return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off);
     }
     propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
     const cp = o[CP]!;
     const T0 = sat.TL - (which === "h" ? (yL - target) / cp : sat.TL * (1 - Math.exp((target - yL) / cp)));
-    const r = solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple");
+    const r = newtonAtP(f, p, which, target, Math.max(T0, f.Tmin), sat.rhoL, f.Tmin, sat.TL, sat.rhoL * (1 - 1e-9), Infinity, true)
+      ?? solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple");
     return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
   }
-  const r = solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
+  // Above every saturation pressure there is one stable root at each T; start from the critical isotherm.
+  const rc = densityTP(f, Math.min(f.Tc, f.Tmax), p, "single");
+  const r = newtonAtP(f, p, which, target, f.Tc, rc, f.Tmin, f.Tmax, 0, Infinity, true)
+    ?? solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
   return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
 }
 

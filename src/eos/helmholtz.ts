@@ -46,13 +46,30 @@ export interface Helmholtz {
   evalIdeal(tau: number): void;
 }
 
+/**
+ * Chains a fluid's kernels into one function. Built per fluid with its own call sites, so each site
+ * sees a single kernel and stays monomorphic however many fluids a process loads.
+ */
+function chain(fns: ((...args: any[]) => void)[], outer: string[], prologue: string, inner: string[]): (...args: number[]) => void {
+  const names = fns.map((_, k) => `k${k}`);
+  const src = `const [${names.join(", ")}] = fns;
+return function (${outer.join(", ")}) {
+  ${prologue}
+  ${names.map((n) => `${n}(${inner.join(", ")});`).join("\n  ")}
+};`;
+  return new Function("fns", src)(fns) as (...args: number[]) => void;
+}
+
 export function buildHelmholtz(f: FluidFile): Helmholtz {
   const Tr = f.reducing.T;
   const residual = f.residual.map(residualKernel);
   const ideal = f.ideal.map((t) => idealKernel(t, Tr));
   const r = new Float64Array(6);
   const i = new Float64Array(3);
-  const nr = residual.length, ni = ideal.length;
+  const resFns = residual.map((k) => (tau: number, delta: number, lnTau: number, lnDelta: number) => k.add(tau, delta, lnTau, lnDelta, r));
+  const idFns = ideal.map((k) => (tau: number, lnTau: number) => k.add(tau, lnTau, i));
+  const evalResidual = chain(resFns, ["tau", "delta"], "const lnTau = Math.log(tau), lnDelta = Math.log(delta);", ["tau", "delta", "lnTau", "lnDelta"]);
+  const evalIdeal = chain(idFns, ["tau"], "const lnTau = Math.log(tau);", ["tau", "lnTau"]);
   return {
     Tr,
     rhor: f.reducing.rho,
@@ -60,14 +77,12 @@ export function buildHelmholtz(f: FluidFile): Helmholtz {
     r,
     i,
     evalResidual(tau, delta) {
-      r.fill(0);
-      const lnTau = Math.log(tau), lnDelta = Math.log(delta);
-      for (let k = 0; k < nr; k++) residual[k]!.add(tau, delta, lnTau, lnDelta, r);
+      r[0] = 0; r[1] = 0; r[2] = 0; r[3] = 0; r[4] = 0; r[5] = 0;
+      evalResidual(tau, delta);
     },
     evalIdeal(tau) {
-      i.fill(0);
-      const lnTau = Math.log(tau);
-      for (let k = 0; k < ni; k++) ideal[k]!.add(tau, lnTau, i);
+      i[0] = 0; i[1] = 0; i[2] = 0;
+      evalIdeal(tau);
     },
   };
 }

@@ -115,7 +115,55 @@ export function saturationT(f: Fluid, T: number): Saturation {
 /** Pressure at the lowest saturation temperature and at the highest the solver reaches. */
 export function saturationPressureRange(f: Fluid): [number, number] {
   if (f.pseudoPure) return [f.pBubble!.value(f.Tmin), f.pc];
-  return [f.data.triple.pVapour, pureSaturationT(f, f.satTmax).pL];
+  f.satPmax ??= pureSaturationT(f, f.satTmax).pL;
+  return [f.data.triple.pVapour, f.satPmax];
+}
+
+/**
+ * Saturation at p by one Newton iteration in (τ, δL, δV) on three equations: equal J = δ(1 + δαʳ_δ) and
+ * K = δαʳ_δ + αʳ + ln δ in both phases (equal p and g at one T), and the vapour pressure equal to p.
+ * Two residual evaluations per step. Returns undefined where it does not converge, for the caller's fallback.
+ */
+function newtonSaturationP(f: Fluid, p: number): Saturation | undefined {
+  const m = f.model, r = m.r, rr = m.rhor;
+  const T0 = Math.min(Math.max(f.pSat!.invert(p), f.Tmin), f.satTmax);
+  const [gL, gV] = startingDensities(f, T0);
+  let tau = m.Tr / T0, dL = gL / rr, dV = gV / rr;
+  const c = p / (rr * m.R * m.Tr); // p/(ρr R T) = c·τ
+  for (let k = 0; k < 30; k++) {
+    m.evalResidual(tau, dL);
+    const JL = dL * (1 + r[1]!), KL = r[1]! + r[0]! + Math.log(dL);
+    const JdL = 1 + 2 * r[1]! + r[3]!, KdL = (2 * r[1]! + r[3]! + 1) / dL;
+    const JtL = (dL * r[5]!) / tau, KtL = (r[5]! + r[2]!) / tau;
+    m.evalResidual(tau, dV);
+    const JV = dV * (1 + r[1]!), KV = r[1]! + r[0]! + Math.log(dV);
+    const JdV = 1 + 2 * r[1]! + r[3]!, KdV = (2 * r[1]! + r[3]! + 1) / dV;
+    const JtV = (dV * r[5]!) / tau, KtV = (r[5]! + r[2]!) / tau;
+    // F = [JL − JV, KL − KV, JV − cτ]; unknowns (τ, δL, δV).
+    const F0 = JL - JV, F1 = KL - KV, F2 = JV - c * tau;
+    const a00 = JtL - JtV, a01 = JdL, a02 = -JdV;
+    const a10 = KtL - KtV, a11 = KdL, a12 = -KdV;
+    const a20 = JtV - c, a21 = 0, a22 = JdV;
+    const det = a00 * (a11 * a22 - a12 * a21) - a01 * (a10 * a22 - a12 * a20) + a02 * (a10 * a21 - a11 * a20);
+    if (!Number.isFinite(det) || det === 0) return undefined;
+    const x0 = (F0 * (a11 * a22 - a12 * a21) - a01 * (F1 * a22 - a12 * F2) + a02 * (F1 * a21 - a11 * F2)) / det;
+    const x1 = (a00 * (F1 * a22 - a12 * F2) - F0 * (a10 * a22 - a12 * a20) + a02 * (a10 * F2 - F1 * a20)) / det;
+    const x2 = (a00 * (a11 * F2 - F1 * a21) - a01 * (a10 * F2 - F1 * a20) + F0 * (a10 * a21 - a11 * a20)) / det;
+    // Limit the step so neither density closes more than a third of the gap, as in the T-given solver.
+    const gap = dL - dV;
+    const g = Math.min(1, gap / (3 * Math.max(Math.abs(x1), Math.abs(x2), 1e-300)), 0.05 * tau / Math.max(Math.abs(x0), 1e-300));
+    const nt = tau - g * x0, nL = dL - g * x1, nV = dV - g * x2;
+    if (!(nV > 0 && nL > nV && nt > 0)) return undefined;
+    const done = Math.abs(nt - tau) <= 1e-13 * tau && Math.abs(nL - dL) <= 1e-11 * dL && Math.abs(nV - dV) <= 1e-11 * dV;
+    tau = nt; dL = nL; dV = nV;
+    if (done) {
+      const T = m.Tr / tau;
+      if (T < f.Tmin - 1e-9 || T > f.satTmax) return undefined;
+      const sat = satState(f, T, dL, dV);
+      return Math.abs(sat.pV / p - 1) < 1e-12 ? { ...sat, pL: p, pV: p } : undefined;
+    }
+  }
+  return undefined;
 }
 
 /** Saturation at pressure p [Pa]: for blends, bubble liquid at T_bubble(p) and dew vapour at T_dew(p). */
@@ -131,7 +179,9 @@ export function saturationP(f: Fluid, p: number): Saturation {
   const [pmin, pmaxSat] = saturationPressureRange(f);
   if (p < pmin * (1 - 1e-9)) throw rangeError("p", p, `${pmin} Pa (triple point) to ${pmaxSat} Pa for saturation of ${f.id}`, "E_BELOW_TRIPLE");
   if (p > pmaxSat) throw rangeError("p", p, `${pmin} Pa to ${pmaxSat} Pa for saturation of ${f.id} (close to the critical point the two phases merge)`);
-  // Newton on T with the Clausius–Clapeyron slope; the saturation densities carry over between steps.
+  const fast = newtonSaturationP(f, p);
+  if (fast) return fast;
+  // Fallback: Newton on T with the Clausius–Clapeyron slope; the saturation densities carry over between steps.
   let T = Math.min(Math.max(f.pSat!.invert(p), f.Tmin), f.satTmax);
   let lo = f.Tmin, hi = f.satTmax;
   let sat = pureSaturationT(f, T);

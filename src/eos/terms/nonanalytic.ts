@@ -9,6 +9,9 @@ export function nonanalyticTerms(rows: number[][], names: string[]): ResidualKer
   const [n, a, b, beta, A, B, C, D] = columns(rows, names, ["n", "a", "b", "beta", "A", "B", "C", "D"]) as Float64Array[] as [
     Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array, Float64Array];
   const count = n.length;
+  const betaSet = Float64Array.from(new Set(beta)), aSet = Float64Array.from(new Set(a));
+  const betaIdx = Uint8Array.from(beta, (x) => betaSet.indexOf(x)), aIdx = Uint8Array.from(a, (x) => aSet.indexOf(x));
+  const pBeta = new Float64Array(betaSet.length), pA = new Float64Array(aSet.length);
   return {
     add(tau, deltaIn, _lnTau, _lnDelta, acc) {
       let delta = deltaIn;
@@ -16,21 +19,26 @@ export function nonanalyticTerms(rows: number[][], names: string[]): ResidualKer
       const dm1 = delta - 1, tm1 = tau - 1;
       const d2 = dm1 * dm1;
       let f = 0, fD = 0, fT = 0, fDD = 0, fTT = 0, fDT = 0;
+      // Powers of (δ−1)² shared by terms with the same β or a: one pow per distinct exponent per call.
+      // exp(k·ln x) is several times faster than Math.pow in V8 and as exact for these arguments.
+      const lnD2 = Math.log(d2);
+      for (let j = 0; j < betaSet.length; j++) pBeta[j] = Math.exp((1 / (2 * betaSet[j]!) - 1) * lnD2);
+      for (let j = 0; j < aSet.length; j++) pA[j] = Math.exp((aSet[j]! - 1) * lnD2);
       for (let i = 0; i < count; i++) {
         const ai = a[i]!, bi = b[i]!, bei = beta[i]!, Ai = A[i]!, Bi = B[i]!, Ci = C[i]!, Di = D[i]!;
-        const p1 = Math.pow(d2, 1 / (2 * bei) - 1); // ((δ−1)²)^(1/(2β) − 1)
+        const p1 = pBeta[betaIdx[i]!]!; // ((δ−1)²)^(1/(2β) − 1)
         const theta = 1 - tau + Ai * p1 * d2;
-        const pa1 = Math.pow(d2, ai - 1);
+        const pa1 = pA[aIdx[i]!]!; // ((δ−1)²)^(a − 1)
         let Delta = theta * theta + Bi * pa1 * d2;
         if (Delta < 1e-300) Delta = 1e-300;
         const psi = Math.exp(-Ci * d2 - Di * tm1 * tm1);
         // Δ and its derivatives; (1/(δ−1))·∂Δ/∂δ is kept as `r` to avoid a 0/0 at δ = 1.
         const r = Ai * theta * (2 / bei) * p1 + 2 * Bi * ai * pa1;
         const dDelta = dm1 * r;
-        const ddDelta = r + d2 * (4 * Bi * ai * (ai - 1) * Math.pow(d2, ai - 2)
+        const ddDelta = r + d2 * (4 * Bi * ai * (ai - 1) * (pa1 / d2)
           + 2 * Ai * Ai * (1 / (bei * bei)) * p1 * p1
-          + Ai * theta * (4 / bei) * (1 / (2 * bei) - 1) * Math.pow(d2, 1 / (2 * bei) - 2));
-        const Db = Math.pow(Delta, bi);
+          + Ai * theta * (4 / bei) * (1 / (2 * bei) - 1) * (p1 / d2));
+        const Db = Math.exp(bi * Math.log(Delta));
         const Db1 = Db / Delta; // Δ^(b−1)
         const Db2 = Db1 / Delta; // Δ^(b−2)
         const dDb = bi * Db1 * dDelta;

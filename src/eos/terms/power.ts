@@ -1,44 +1,24 @@
 // Power terms n τ^t δ^d exp(−δ^l): the polynomial and exponential body of every multiparameter equation.
-// One exp per term carries τ^t δ^d exp(−δ^l) together; δ^l is computed once per distinct l.
-import { columns, R_A, R_D, R_DD, R_DT, R_T, R_TT, type ResidualKernel } from "./kernel.js";
+// Compiled to straight-line code (codegen.ts): τ^t, δ^d by multiplication, exp(−δ^l) once per distinct l.
+import { columns, type ResidualKernel } from "./kernel.js";
+import { compile, lit, powerStatements } from "./codegen.js";
 
 export function powerTerms(rows: number[][], names: string[]): ResidualKernel {
-  const [n, t, d, l] = columns(rows, names, ["n", "t", "d", "l"]) as [Float64Array, Float64Array, Float64Array, Float64Array];
-  const count = n.length;
-  const lValues = [...new Set(l)].sort((a, b) => a - b);
-  const lIndex = Uint8Array.from(l, (x) => lValues.indexOf(x));
-  const lv = Float64Array.from(lValues);
-  const lIsInt = lValues.every((x) => Number.isInteger(x) && x <= 8);
-  const dl = new Float64Array(lValues.length);
-  const tt1 = Float64Array.from(t, (x) => x * (x - 1));
-  return {
-    add(_tau, delta, lnTau, lnDelta, acc) {
-      for (let k = 0; k < lv.length; k++) {
-        const lk = lv[k]!;
-        if (lk === 0) dl[k] = 0;
-        else if (lIsInt) {
-          let p = delta;
-          for (let i = 1; i < lk; i++) p *= delta;
-          dl[k] = p;
-        } else dl[k] = Math.pow(delta, lk);
-      }
-      let a = 0, aD = 0, aT = 0, aDD = 0, aTT = 0, aDT = 0;
-      for (let i = 0; i < count; i++) {
-        const li = lIndex[i]!;
-        const dli = dl[li]!;
-        const lk = lv[li]!;
-        const di = d[i]!, ti = t[i]!;
-        const u = n[i]! * Math.exp(ti * lnTau + di * lnDelta - dli);
-        const A = di - lk * dli;
-        a += u;
-        aD += u * A;
-        aT += u * ti;
-        aDD += u * (A * A - di - lk * (lk - 1) * dli);
-        aTT += u * tt1[i]!;
-        aDT += u * A * ti;
-      }
-      acc[R_A]! += a; acc[R_D]! += aD; acc[R_T]! += aT;
-      acc[R_DD]! += aDD; acc[R_TT]! += aTT; acc[R_DT]! += aDT;
-    },
-  };
+  const [n, t, d, l] = columns(rows, names, ["n", "t", "d", "l"]).map((c) => Array.from(c)) as [number[], number[], number[], number[]];
+  const tp = powerStatements("tau", "lnTau", "T", t);
+  const dp = powerStatements("delta", "lnDelta", "D", [...d, ...l.filter((x) => x > 0)]);
+  const body = [...tp.code, ...dp.code];
+  const ls = [...new Set(l.filter((x) => x > 0))];
+  ls.forEach((x, k) => body.push(`const E${k} = Math.exp(-${dp.expr.get(x)});`));
+  for (let i = 0; i < n.length; i++) {
+    const li = l[i]!, di = d[i]!, ti = t[i]!;
+    const dl = li > 0 ? dp.expr.get(li)! : "0";
+    const e = li > 0 ? ` * E${ls.indexOf(li)}` : "";
+    body.push(`{ const u = ${lit(n[i]!)} * ${tp.expr.get(ti)} * ${dp.expr.get(di)}${e};`
+      + ` const A = ${lit(di)} - ${lit(li)} * ${dl};`
+      + ` a += u; aD += u * A; aT += u * ${lit(ti)};`
+      + ` aDD += u * (A * A - ${lit(di)} - ${lit(li * (li - 1))} * ${dl});`
+      + ` aTT += u * ${lit(ti * (ti - 1))}; aDT += u * A * ${lit(ti)}; }`);
+  }
+  return { add: compile(body) };
 }
