@@ -1,0 +1,180 @@
+// Two-stage vapour compression with an intermediate pressure (default: geometric mean of evaporating
+// and condensing pressures), either with a flash tank or with an economiser (subcooler) heat exchanger.
+import { flashPX, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+import { chainPoints, makePoint, type ChainStep } from "./chain.js";
+import { requireRefrigeratingEffect } from "./circuit-checks.js";
+import { cycleInputError, differenceText, pressureText, requireDifference, temperatureText } from "./check.js";
+import { compress, compressorInput, type Compression, type Compressor } from "./compression.js";
+import { resolveLevel, type Level, type ResolvedLevel } from "./level.js";
+import { tracePath, type Leg } from "./path.js";
+import { performanceOf, type Stage } from "./performance.js";
+import type { CyclePoint, Role } from "./point.js";
+import { mix, subcooledLiquid, superheatedVapour, throttle } from "./processes.js";
+import type { CycleResult } from "./result.js";
+import { commonInputs, commonNotes, levelText, lineDrops, requireBelow, type CommonSpec } from "./spec.js";
+
+export type Arrangement = "flash-tank" | "economiser";
+
+/**
+ * How far the economiser's liquid outlet stays above the temperature of the injected refrigerant
+ * entering it, when not given [K]. A few kelvin is usual for plate economisers (common practice).
+ */
+export const DEFAULT_ECONOMISER_APPROACH = 5;
+
+export interface TwoStageSpec extends CommonSpec {
+  condensing: Level;
+  subcooling?: number;
+  /** Intermediate level; default the geometric mean of the evaporating and condensing pressures. */
+  intermediate?: Level;
+  arrangement: Arrangement;
+  /** Economiser liquid outlet minus injection inlet temperature [K]; default 5 K. */
+  economiserApproach?: number;
+  lowStage: Compressor;
+  highStage: Compressor;
+}
+
+interface Levels { evaporating: ResolvedLevel; condensing: ResolvedLevel; intermediate: ResolvedLevel & { source: "given" | "geometric-mean" } }
+
+function resolveLevels(f: Fluid, spec: TwoStageSpec): Levels {
+  const evaporating = resolveLevel(f, "evaporating", spec.evaporating, spec.glidePoint);
+  const condensing = resolveLevel(f, "condensing", spec.condensing, spec.glidePoint);
+  requireBelow(evaporating, condensing);
+  const given = spec.intermediate;
+  const level = given ?? { p: Math.sqrt(evaporating.p * condensing.p) };
+  const intermediate = { ...resolveLevel(f, "intermediate", level, spec.glidePoint), source: given ? "given" as const : "geometric-mean" as const };
+  requireBelow(evaporating, intermediate);
+  requireBelow(intermediate, condensing);
+  return { evaporating, condensing, intermediate };
+}
+
+/** The two compressions and the states around them that both arrangements share. */
+interface Common {
+  evapOut: State; lowSuction: State; low: Compression;
+  condOut: State;
+}
+
+function commonStates(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, superheat: number, subcooling: number, suctionDrop: number): Common {
+  const evapOut = superheatedVapour(f, L.evaporating.p, superheat, ref);
+  const lowSuction = suctionDrop > 0 ? throttle(f, evapOut, L.evaporating.p - suctionDrop, ref) : evapOut;
+  const low = compress(f, lowSuction, L.intermediate.p, spec.lowStage, ref, compressorInput(spec.lowStage, "low stage"));
+  return { evapOut, lowSuction, low, condOut: subcooledLiquid(f, L.condensing.p, subcooling, ref) };
+}
+
+/** Vapour fraction of a state on the tie line at its pressure: below 0 for subcooled liquid. */
+function vapourFraction(f: Fluid, st: State, ref: ReferenceName): number {
+  const hL = flashPX(f, st.p, 0, ref).h, hV = flashPX(f, st.p, 1, ref).h;
+  return (st.h - hL) / (hV - hL);
+}
+
+interface Built { steps: ChainStep[]; branch: ChainStep[]; branchJoin: Role; highFlow: number; low: Compression; high: Compression; notes: string[]; approach?: number }
+
+/** Flash tank: the condenser liquid flashes at the intermediate pressure; its vapour joins the low-stage discharge. */
+function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
+  const pi = L.intermediate.p;
+  const tankIn = throttle(f, c.condOut, pi, ref);
+  const x = vapourFraction(f, tankIn, ref);
+  if (x >= 1) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the liquid would flash entirely to vapour in the flash tank", `an intermediate pressure above ${pressureText(L.evaporating.p)} where the condenser liquid stays partly liquid`);
+  const flashes = x > 0;
+  const highFlow = flashes ? 1 / (1 - x) : 1;
+  const tankLiquid = flashes ? flashPX(f, pi, 0, ref) : tankIn;
+  const tankVapour = flashPX(f, pi, 1, ref);
+  const highSuction = flashes ? mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: tankVapour, flow: highFlow - 1 }], ref) : c.low.discharge;
+  const high = compress(f, highSuction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
+  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const steps: ChainStep[] = [
+    ...lowSteps(c),
+    { state: highSuction, role: "high-stage-suction", flow: highFlow, process: "isobaric", same: !flashes },
+    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
+    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
+    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    { state: tankIn, role: "flash-tank-inlet", flow: highFlow, process: "isenthalpic" },
+    { state: tankLiquid, role: "flash-tank-liquid", flow: 1, process: "isobaric", same: !flashes },
+    { state: throttle(f, tankLiquid, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
+  ];
+  const branch: ChainStep[] = flashes ? [{ state: tankVapour, role: "flash-tank-vapour", flow: highFlow - 1, process: "isobaric" }] : [];
+  const notes = ["flash tank: the condenser liquid flashes at the intermediate pressure; saturated vapour from the tank mixes with the low-stage discharge, saturated liquid feeds the evaporator"];
+  return { steps, branch, branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
+}
+
+/** Economiser: part of the condenser liquid, throttled to the intermediate pressure, subcools the rest and is injected into the high stage. */
+function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
+  const pi = L.intermediate.p;
+  const approach = requireDifference("economiser-approach", spec.economiserApproach ?? DEFAULT_ECONOMISER_APPROACH);
+  const injIn = throttle(f, c.condOut, pi, ref);
+  const Tout = injIn.T + approach;
+  if (!(Tout < c.condOut.T)) {
+    throw cycleInputError("economiser-approach", approach, differenceText(approach), `the liquid would leave the economiser at ${temperatureText(Tout)}, not colder than it enters (${temperatureText(c.condOut.T)})`,
+      `less than ${differenceText(c.condOut.T - injIn.T)}, or a lower intermediate level`);
+  }
+  const liquidOut = flashTP(f, Tout, L.condensing.p, ref);
+  const injOut = flashPX(f, pi, 1, ref);
+  const injFlow = (c.condOut.h - liquidOut.h) / (injOut.h - injIn.h);
+  const highFlow = 1 + injFlow;
+  const highSuction = mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: injOut, flow: injFlow }], ref);
+  const high = compress(f, highSuction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
+  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const steps: ChainStep[] = [
+    ...lowSteps(c),
+    { state: highSuction, role: "high-stage-suction", flow: highFlow, process: "isobaric" },
+    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
+    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
+    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    { state: liquidOut, role: "economiser-liquid-outlet", flow: 1, process: "isobaric" },
+    { state: throttle(f, liquidOut, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
+  ];
+  const branch: ChainStep[] = [
+    { state: injIn, role: "economiser-injection-inlet", flow: injFlow, process: "isenthalpic" },
+    { state: injOut, role: "economiser-injection-outlet", flow: injFlow, process: "isobaric" },
+  ];
+  const notes = ["economiser: part of the condenser liquid is throttled to the intermediate pressure, subcools the main liquid and leaves as saturated vapour that mixes with the low-stage discharge"];
+  return { steps, branch, branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes, approach };
+}
+
+function lowSteps(c: Common): ChainStep[] {
+  return [
+    { state: c.evapOut, role: "evaporator-outlet", flow: 1, process: "isobaric" },
+    { state: c.lowSuction, role: "low-stage-suction", flow: 1, process: "isenthalpic", same: c.lowSuction === c.evapOut },
+    { state: c.low.discharge, role: "low-stage-discharge", flow: 1, process: "compression" },
+  ];
+}
+
+export function twoStageCycle(spec: TwoStageSpec): CycleResult {
+  const { f, ref, superheat, capacity } = commonInputs(spec);
+  const subcooling = requireDifference("subcooling", spec.subcooling ?? 0);
+  const L = resolveLevels(f, spec);
+  const drops = lineDrops(spec, L.evaporating.p, L.condensing.p);
+  const c = commonStates(f, ref, spec, L, superheat, subcooling, drops.suction);
+  const b = spec.arrangement === "flash-tank" ? flashTank(f, ref, spec, L, c, drops.discharge) : economiser(f, ref, spec, L, c, drops.discharge);
+  const main = chainPoints(f, b.steps);
+  const side = chainPoints(f, b.branch, main.points.length + 1);
+  const points = [...main.points, ...side.points];
+  const at = (role: Role) => points.find((p) => p.roles.includes(role))!;
+  const stage = (name: Stage["name"], suction: Role, discharge: Role, comp: Compression, flow: number, iso: Role): Stage => {
+    const d = at(discharge);
+    return { name, suction: at(suction), discharge: d, isentropic: makePoint(f, `${d.label}s`, [iso], comp.isentropic, flow), efficiency: comp.efficiency, flow };
+  };
+  const stages = [
+    stage("low stage", "low-stage-suction", "low-stage-discharge", b.low, 1, "isentropic-low-stage-discharge"),
+    stage("high stage", "high-stage-suction", "high-stage-discharge", b.high, b.highFlow, "isentropic-high-stage-discharge"),
+  ];
+  const performance = performanceOf({ evaporatorInlet: at("evaporator-inlet"), evaporatorOutlet: at("evaporator-outlet"), rejectionInlet: at("condenser-inlet"), rejectionOutlet: at("condenser-outlet"), stages }, capacity);
+  requireRefrigeratingEffect(performance.refrigeratingEffect, L.condensing);
+  const path = tracePath(f, c.evapOut, [...main.legs, { to: c.evapOut, process: "isobaric" }], ref);
+  path.pop();
+  const result: CycleResult = {
+    model: spec.arrangement === "flash-tank" ? "two-stage-flash-tank" : "two-stage-economiser",
+    fluid: f.id, blend: f.pseudoPure, reference: ref, levels: L, superheat, subcooling, drops,
+    notes: [...commonNotes(f), "both stages from their isentropic efficiencies or discharge temperatures", ...b.notes],
+    points, auxiliary: stages.map((s) => s.isentropic), stages, performance, path,
+    branches: side.points.length ? [branchPath(f, ref, b, main.points, side.points, side.legs)] : [],
+  };
+  if (b.approach !== undefined) result.economiserApproach = b.approach;
+  return result;
+}
+
+/** The side stream's path: from where it leaves the main circuit, through its own points, to where it rejoins. */
+function branchPath(f: Fluid, ref: ReferenceName, b: Built, main: CyclePoint[], side: CyclePoint[], legs: Leg[]) {
+  const start = b.branch[0]!.role === "economiser-injection-inlet" ? main.find((p) => p.roles.includes("condenser-outlet"))! : main.find((p) => p.roles.includes("flash-tank-inlet"))!;
+  const join = main.find((p) => p.roles.includes(b.branchJoin))!;
+  return tracePath(f, start.state, [{ to: side[0]!.state, process: b.branch[0]!.process }, ...legs, { to: join.state, process: "isobaric" }], ref);
+}
