@@ -28,6 +28,8 @@ export interface Overlay {
   /** Path through the points in order; closed for a cycle. Segments may be refined with intermediate states. */
   path: { h: number; p: number }[];
   closed: boolean;
+  /** Optional open paths of side streams (a flash tank's vapour, an economiser's injection), drawn like the path. */
+  branches?: { h: number; p: number }[][];
   points: OverlayPoint[];
   /** State table and performance panel (cycles), or the readings table (points). */
   tables: OverlayTable[];
