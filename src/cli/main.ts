@@ -5,6 +5,7 @@ import { Command, CommanderError } from "commander";
 import { defaultIo, EXIT_OK, EXIT_USAGE, type Io } from "./io.js";
 import { registerProps } from "./props.js";
 import { registerFluids } from "./fluids.js";
+import { registerCycle } from "./cycle.js";
 
 export const VERSION: string = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
 
@@ -26,6 +27,7 @@ Examples:
   domeprint props R290 T=0C x=1 --reference iir`);
   registerProps(program, io, setCode);
   registerFluids(program, io, setCode);
+  registerCycle(program, io, setCode);
   try {
     await program.parseAsync(argv, { from: "user" });
   } catch (e) {
