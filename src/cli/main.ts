@@ -6,6 +6,7 @@ import { defaultIo, EXIT_OK, EXIT_USAGE, type Io } from "./io.js";
 import { registerProps } from "./props.js";
 import { registerFluids } from "./fluids.js";
 import { registerCycle } from "./cycle.js";
+import { registerSheet } from "./sheet.js";
 
 export const VERSION: string = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
 
@@ -28,6 +29,7 @@ Examples:
   registerProps(program, io, setCode);
   registerFluids(program, io, setCode);
   registerCycle(program, io, setCode);
+  registerSheet(program, io, setCode);
   try {
     await program.parseAsync(argv, { from: "user" });
   } catch (e) {

@@ -41,7 +41,10 @@ export interface SheetOptions {
   saturationTable?: boolean;
   /** Date printed on the sheet and written into its metadata (YYYY-MM-DD); today if unset. */
   date?: string;
+  /** Cycles or readings already evaluated in this sheet's reference state. */
   overlays?: Overlay[];
+  /** Readings files to evaluate against the fluid in the sheet's reference state and draw as points. */
+  pointsFiles?: string[];
 }
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -83,6 +86,7 @@ export interface CheckedSheetOptions {
   saturationTable?: boolean;
   date: string;
   overlays: Overlay[];
+  pointsFiles: string[];
 }
 
 function checkFields(fields: UserFields | undefined): UserFields {
@@ -125,5 +129,6 @@ export function checkSheetOptions(o: SheetOptions): CheckedSheetOptions {
     ...(o.saturationTable !== undefined ? { saturationTable: o.saturationTable } : {}),
     date: o.date === undefined ? today() : checkDate(o.date),
     overlays: o.overlays ?? [],
+    pointsFiles: o.pointsFiles ?? [],
   };
 }

@@ -18,6 +18,7 @@ import { renderSvg } from "../render/svg.js";
 import { atmosphereAt } from "../units/index.js";
 import { engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
 import { getFluid } from "../eos/index.js";
+import { readingsFileOverlay } from "./overlays.js";
 import { checkSheetOptions, type CheckedSheetOptions, type Format, type SheetOptions } from "./options.js";
 
 export const VERSION: string = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
@@ -77,13 +78,15 @@ export async function renderSheet(options: SheetOptions): Promise<RenderedSheet>
   const data = engineData(fluid, o.reference, units, plan.plot);
   const identity = fluidIdentity(data.fluid, data.reference);
   const atmosphere = atmosphereAt(o.altitude);
-  const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined }, paper, reference: data.reference });
+  const overlays = [...o.overlays, ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, data.reference, o.units, o.altitude))];
+  // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
+  const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, overlays }, paper, reference: data.reference });
   const content: SheetContent = {
     fluid: identity,
     lines: data.lines,
     saturationScale: saturationTicks(data.fluid, data.lines, units),
     ...(table ? { saturationTable: saturationRows(data.fluid, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
-    overlays: o.overlays,
+    overlays,
     ...(o.gauge ? { gauge: { altitude: o.altitude, atmosphere } } : {}),
     units,
     fields: o.fields,

@@ -1,0 +1,33 @@
+// Writes a finished sheet's files atomically: every file goes to a temporary name in the target folder
+// first and is renamed into place only when all are written, so a failure never costs a file on disk.
+
+import { randomBytes } from "node:crypto";
+import { mkdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+
+export interface OutputFile {
+  name: string;
+  data: Buffer;
+}
+
+/**
+ * Writes all files or none of them: temporaries are removed if any write fails; renames within one
+ * folder are atomic, so a reader sees either the old file or the new one, never a part.
+ */
+export function writeAtomically(dir: string, files: OutputFile[]): string[] {
+  mkdirSync(dir, { recursive: true });
+  const tag = `${process.pid}-${randomBytes(4).toString("hex")}`;
+  const staged: { temp: string; final: string }[] = [];
+  try {
+    for (const file of files) {
+      const temp = join(dir, `.${file.name}.${tag}.tmp`);
+      staged.push({ temp, final: join(dir, file.name) });
+      writeFileSync(temp, file.data, { flag: "wx" });
+    }
+  } catch (e) {
+    for (const { temp } of staged) rmSync(temp, { force: true });
+    throw e;
+  }
+  for (const { temp, final } of staged) renameSync(temp, final);
+  return staged.map((s) => s.final);
+}
