@@ -26,6 +26,8 @@ export interface HighPressureOptimum {
   evaluations: number;
   /** True when the optimum sits on a bound: the COP still rises towards it. */
   atBound: boolean;
+  /** The lowest pressure within the bounds where the cycle has a refrigerating effect, when above the lower bound [Pa]. */
+  lowestComputable?: number;
 }
 
 export interface CycleResult {

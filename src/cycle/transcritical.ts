@@ -3,7 +3,7 @@
 import { flashTP, type Fluid } from "../eos/index.js";
 import { circuitNotes, requireRefrigeratingEffect } from "./circuit-checks.js";
 import { singleStageCircuit } from "./circuit.js";
-import { cycleInputError, pressureText, temperatureText } from "./check.js";
+import { cycleInputError, pressureText, requireEffectiveness, requireEfficiency, temperatureText } from "./check.js";
 import type { Compressor } from "./compression.js";
 import { resolveLevel } from "./level.js";
 import type { CycleResult } from "./result.js";
@@ -37,11 +37,20 @@ function requireGasCoolerOutlet(f: Fluid, T: number, evaporatingDew: number): nu
   return T;
 }
 
+/** The checks that do not depend on the high-side pressure, so a pressure search can make them once. */
+export function checkTranscriticalInputs(spec: Omit<TranscriticalSpec, "highPressure">) {
+  const common = commonInputs(spec);
+  const evaporating = resolveLevel(common.f, "evaporating", spec.evaporating, spec.glidePoint);
+  const Tgc = requireGasCoolerOutlet(common.f, spec.gasCoolerOutlet, evaporating.dew);
+  if ("efficiency" in spec.compressor) requireEfficiency("efficiency", spec.compressor.efficiency);
+  if (spec.ihx !== undefined) requireEffectiveness("ihx", spec.ihx);
+  lineDrops(spec, evaporating.p, Infinity);
+  return { ...common, evaporating, Tgc };
+}
+
 export function transcriticalCycle(spec: TranscriticalSpec): CycleResult {
-  const { f, ref, superheat, capacity } = commonInputs(spec);
-  const evaporating = resolveLevel(f, "evaporating", spec.evaporating, spec.glidePoint);
+  const { f, ref, superheat, capacity, evaporating, Tgc } = checkTranscriticalInputs(spec);
   const pHigh = requireHighPressure(f, spec.highPressure);
-  const Tgc = requireGasCoolerOutlet(f, spec.gasCoolerOutlet, evaporating.dew);
   const drops = lineDrops(spec, evaporating.p, pHigh);
   const circuit = singleStageCircuit(f, ref, {
     pEvaporator: evaporating.p, superheat, pHigh, highOutlet: flashTP(f, Tgc, pHigh, ref), highSide: "gas-cooler",
