@@ -13,44 +13,46 @@ export interface Ancillary {
 }
 
 export function buildAncillary(a: AncillaryData): Ancillary {
-  const n = a.rows.map((r) => r[0]!);
-  const t = a.rows.map((r) => r[1]!);
+  const n = Float64Array.from(a.rows, (r) => r[0]!);
+  const t = Float64Array.from(a.rows, (r) => r[1]!);
   const { Tr, valueR, form } = a;
-  const sum = (theta: number) => {
-    let s = 0;
-    for (let i = 0; i < n.length; i++) s += n[i]! * Math.pow(theta, t[i]!);
-    return s;
-  };
-  const dsum = (theta: number) => {
-    let s = 0;
-    for (let i = 0; i < n.length; i++) s += n[i]! * t[i]! * Math.pow(theta, t[i]! - 1);
-    return s;
-  };
-  const value = (T: number) => {
-    const theta = Math.max(1 - T / Tr, 0);
-    const S = sum(theta);
-    if (form === "linear") return valueR * (1 + S);
-    if (form === "exp") return valueR * Math.exp(S);
-    return valueR * Math.exp((Tr / T) * S);
-  };
-  const slope = (T: number) => {
+  const count = n.length;
+  let lastT = NaN, lastV = 0, lastS = 0;
+  /** Value and slope at T together: θ^t as exp(t ln θ), one log and one exp per term. */
+  const evalAt = (T: number) => {
+    if (T === lastT) return;
     const theta = Math.max(1 - T / Tr, 1e-12);
-    const S = sum(theta), dS = -dsum(theta) / Tr; // dS/dT
-    if (form === "linear") return valueR * dS;
-    if (form === "exp") return valueR * Math.exp(S) * dS;
-    const e = (Tr / T) * S;
-    return valueR * Math.exp(e) * ((Tr / T) * dS - (Tr / (T * T)) * S);
+    const lnTheta = Math.log(theta);
+    let S = 0, dS = 0;
+    for (let i = 0; i < count; i++) {
+      const u = n[i]! * Math.exp(t[i]! * lnTheta);
+      S += u;
+      dS += t[i]! * u;
+    }
+    dS = -dS / (theta * Tr); // dS/dT
+    if (form === "linear") { lastV = valueR * (1 + S); lastS = valueR * dS; }
+    else if (form === "exp") { lastV = valueR * Math.exp(S); lastS = lastV * dS; }
+    else {
+      const k = Tr / T;
+      lastV = valueR * Math.exp(k * S);
+      lastS = lastV * (k * dS - (k / T) * S);
+    }
+    lastT = T;
   };
+  const value = (T: number) => { evalAt(T); return lastV; };
+  const slope = (T: number) => { evalAt(T); return lastS; };
   const Tmin = a.Tmin, Tmax = Math.min(a.Tmax, Tr);
   const invert = (v: number) => {
-    // value is monotone in T for pressures; bisection guards the Newton steps.
+    // Monotone in T for pressures: Newton on ln(value), guarded by bisection.
     let lo = Tmin * 0.5, hi = Tmax;
     const increasing = value(hi) > value(Tmin);
+    const lv = Math.log(v);
     let T = Math.min(Math.max(Tmin, Tr * 0.7), hi);
     for (let k = 0; k < 100; k++) {
-      const f = value(T) - v;
+      evalAt(T);
+      const f = Math.log(lastV) - lv;
       if ((f > 0) === increasing) hi = T; else lo = T;
-      let next = T - f / slope(T);
+      let next = T - f / (lastS / lastV);
       if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
       if (Math.abs(next - T) < 1e-12 * T) return next;
       T = next;

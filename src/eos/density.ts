@@ -71,6 +71,21 @@ function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: numbe
   let rho = guess !== undefined && guess > 0 ? Math.max(guess, floor)
     : floor > 0 ? floor : Math.min(p / (f.R * T), f.data.triple.rhoLiquid);
   if (!(rho > 0) || !Number.isFinite(rho)) rho = f.rhoc;
+  // First plain Newton from the start (a good start converges in a few steps); it gives up at the
+  // first sign of trouble (an unstable point, a step below the floor) and leaves it to the bracketed search.
+  {
+    let x = rho;
+    for (let k = 0; k < 12; k++) {
+      pressureAndSlope(f.model, T, x, out);
+      const dp = out[1]!, resid = out[0]! - p;
+      if (!(dp > 0)) break;
+      if (Math.abs(resid) <= 1e-13 * p) return x;
+      const next = x - resid / dp;
+      if (!(next > floor) || next > 2 * x) break;
+      if (Math.abs(next - x) <= 1e-15 * x) return next;
+      x = next;
+    }
+  }
   pressureAndSlope(f.model, T, rho, out);
   let lo = 0, hi = 0;
   // Find a stable point first (a liquid guess can sit inside the spinodal near T_c).

@@ -1,0 +1,21 @@
+// The mixture engine's public face: blends and compositions, the multi-fluid model, phase equilibrium and flashes.
+export { getMixture, blendIds, Mixture } from "./mixture.js";
+export type { EstimatedPair } from "./mixture.js";
+export { mixtureFlash, mixtureSaturationT, mixtureSaturationP, MIXTURE_PAIRS } from "./flash.js";
+export type { MixtureInputs, MixtureInputName } from "./flash.js";
+export type { MixtureState, PhaseComposition } from "./state.js";
+export { mixtureReferenceOffset } from "./reference.js";
+export { saturationPoint } from "./saturation.js";
+export type { SaturationPoint } from "./saturation.js";
+export { traceEnvelope } from "./envelope.js";
+export type { Envelope, EnvelopePoint } from "./envelope.js";
+export { MixtureModel } from "./model.js";
+export { mixturePropertiesTRho, mixturePressureAndSlope } from "./properties.js";
+export { mixtureDensityTP } from "./density.js";
+export { lnFugacityCoefficients, residualChemicalPotentials } from "./fugacity.js";
+export { rachfordRice } from "./rachford-rice.js";
+export { parseComposition, blendFiles, findBlend, blendFileSchema } from "./blend-file.js";
+export type { BlendFile } from "./blend-file.js";
+export { binaryPair, binaryData, linearRule, BINARY_FILE, BLEND_DIR } from "./binary-data.js";
+export type { BinaryPair, EstimateRule } from "./binary-data.js";
+export { gergDepartureTerms, departureKernel } from "./departure.js";
