@@ -202,10 +202,10 @@ export class IncipientSolver {
         if (!solveLinear(this.Jsave, this.dXdS, n)) this.dXdS.fill(NaN);
         return;
       }
-      // Damping: no step may move ln K by more than 1, ln T by more than 0.05 or ln p by more than 0.3.
+      // Damping: no step may move ln K by more than 1, ln T by more than 0.02 or ln p by more than 0.3.
       let scale = 1;
       for (let k = 0; k < N; k++) scale = Math.min(scale, 1 / Math.max(Math.abs(st[k]!), 1e-300));
-      scale = Math.min(scale, 0.05 / Math.max(Math.abs(st[N]!), 1e-300), 0.3 / Math.max(Math.abs(st[N + 1]!), 1e-300));
+      scale = Math.min(scale, 0.02 / Math.max(Math.abs(st[N]!), 1e-300), 0.3 / Math.max(Math.abs(st[N + 1]!), 1e-300));
       for (let k = 0; k < n; k++) X[k]! += scale * st[k]!;
       lastScale = scale;
     }

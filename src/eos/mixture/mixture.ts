@@ -61,18 +61,31 @@ export class Mixture {
     this.split = new TwoPhaseSplit(this.model);
   }
 
-  /** The phase envelope, traced at first use from the bubble point at Tmin. */
+  /**
+   * The phase envelope, traced at first use from the bubble point at max(Tmin, T_r/2): further down the
+   * pressures fall below a few pascals, where nothing is charted and Wilson's start is poor.
+   */
   envelope(): Envelope {
     if (this.env) return this.env;
     if (this.envError) throw this.envError;
     try {
-      this.env = traceEnvelope(this.model, this.z, this.Tmin, this.Tmin);
+      this.model.reduce(this.z);
+      const T0 = Math.max(this.Tmin, 0.5 * this.model.Tr);
+      // Wilson's start can fail at the lowest temperatures; two warmer starts before giving up.
+      for (let k = 0; ; k++) {
+        try {
+          this.env = traceEnvelope(this.model, this.z, T0 + 15 * k, this.Tmax, this.pmax);
+          break;
+        } catch (e) {
+          if (!(e instanceof DomeprintError) || k === 2) throw e;
+        }
+      }
     } catch (e) {
       if (!(e instanceof DomeprintError)) throw e;
       this.envError = new DomeprintError("E_CONVERGENCE", `phase envelope of ${this.id}: ${e.message}`, { input: "fluid", value: this.id, allowed: "a mixture whose two-phase boundary can be traced" });
       throw this.envError;
     }
-    return this.env;
+    return this.env!;
   }
 
   /** Mole fractions from mass fractions w of the components. */

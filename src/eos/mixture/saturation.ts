@@ -49,7 +49,7 @@ function result(mix: Mixture, kind: "bubble" | "dew"): SaturationPoint {
 export function saturationPoint(mix: Mixture, kind: "bubble" | "dew", given: "T" | "p", v: number): SaturationPoint {
   const env = mix.envelope();
   const c = env.critical;
-  const side = kind === "bubble" ? env.bubble : [...env.dew].reverse();
+  const side = kind === "bubble" ? env.bubble : env.dew;
   const lowest = side[0]!;
   const limit = given === "T" ? c.T : c.p;
   const low = given === "T" ? lowest.T : lowest.p;
