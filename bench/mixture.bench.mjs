@@ -1,0 +1,24 @@
+// Timing of the mixture engine (plain node against dist/; build first with `npx tsc -p tsconfig.json`):
+// bubble and dew points at given T, and two-phase (p, h) flashes, for a binary, a ternary and a quinary blend.
+import { getMixture, mixtureFlash, saturationPoint } from "../dist/eos/mixture/index.js";
+
+function time(label, count, fn) {
+  for (let i = 0; i < Math.min(20, count); i++) fn(i);
+  const t0 = process.hrtime.bigint();
+  for (let i = 0; i < count; i++) fn(i);
+  const us = Number(process.hrtime.bigint() - t0) / 1e3 / count;
+  console.log(`${label.padEnd(48)} ${us.toFixed(1).padStart(9)} µs`);
+}
+
+for (const id of ["R410A-mix", "R407C-mix", "R448A"]) {
+  const t0 = process.hrtime.bigint();
+  const mix = getMixture(id);
+  mix.envelope();
+  console.log(`${id}: envelope traced once in ${(Number(process.hrtime.bigint() - t0) / 1e6).toFixed(1)} ms (${mix.N} components)`);
+  time(`${id} bubble point at T`, 400, (i) => saturationPoint(mix, "bubble", "T", 240 + (i % 80)));
+  time(`${id} dew point at T`, 400, (i) => saturationPoint(mix, "dew", "T", 240 + (i % 80)));
+  const p = 8e5;
+  const lo = mixtureFlash(mix, { p, x: 0 }).h, hi = mixtureFlash(mix, { p, x: 1 }).h;
+  time(`${id} two-phase (p, h) flash`, 200, (i) => mixtureFlash(mix, { p, h: lo + ((i % 97) + 1) / 99 * (hi - lo) }));
+  time(`${id} liquid (p, h) flash`, 200, (i) => mixtureFlash(mix, { p, h: lo - 20e3 - (i % 50) * 1e3 }));
+}
