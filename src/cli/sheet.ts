@@ -133,7 +133,8 @@ Examples:
         const written = writeAtomically(flags.output, files);
         const { labels } = sheet.report;
         if (!io.quiet) {
-          io.err(`labels: ${labels.placed} placed, ${labels.dropped} dropped${labels.unlabelled.length ? ` (unlabelled: ${labels.unlabelled.join(", ")})` : ""}\n`);
+          io.err(`labels: ${labels.placed} placed, ${labels.dropped} dropped\n`);
+          if (labels.unlabelled.length) io.err(`note: lines left out for want of room for their labels: ${labels.unlabelled.map((u) => u.text).join(", ")}\n`);
           for (const note of sheet.report.omitted) io.err(`note: ${note}\n`);
         }
         io.out(written.map((w) => `${w}\n`).join(""));

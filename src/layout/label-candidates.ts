@@ -64,12 +64,13 @@ function deviation(points: number[], s: number[], from: number, to: number, a: [
 /**
  * Candidates along each piece, `step` mm apart. The text runs along the chord of the stretch it covers
  * and is turned so it never reads upside down; stretches that bend more than a fraction of the type's
- * height under the text are skipped, because a label there would stand off its line.
+ * height under the text are skipped, because a label there would stand off its line. Labels of lines
+ * that must stay whole (the dome) are set `beside` mm clear of the line instead of on it.
  */
-export function labelCandidates(pieces: number[][], shape: LabelShape, step: number): Candidate[] {
+export function labelCandidates(pieces: number[][], shape: LabelShape, step: number, beside = 0, bend = 0.35): Candidate[] {
   const out: Candidate[] = [];
   const half = shape.width / 2 + shape.pad;
-  const tolerance = 0.35 * shape.capHeight;
+  const tolerance = bend * shape.capHeight;
   // The box is centred on the ink, which sits off the anchor when ascent and descent differ.
   const inkOffset = shape.capHeight / 2 + (shape.descent - shape.ascent) / 2;
   const hh = (shape.ascent + shape.descent) / 2 + shape.pad;
@@ -84,16 +85,21 @@ export function labelCandidates(pieces: number[][], shape: LabelShape, step: num
       let angle = Math.atan2(b[1] - a[1], b[0] - a[0]);
       if (angle > UPRIGHT_LIMIT) angle -= Math.PI;
       else if (angle <= UPRIGHT_LIMIT - Math.PI) angle += Math.PI;
-      const [x, y] = pointAt(points, s, at);
+      const [px, py] = pointAt(points, s, at);
       const ux = Math.cos(angle), uy = Math.sin(angle);
-      out.push({
-        x,
-        y,
-        rotate: (-angle * 180) / Math.PI,
-        box: box(x - uy * inkOffset, y + ux * inkOffset, half, hh, angle),
-        piece,
-        at,
-      });
+      // On the line, or (beside > 0) set off to either side of it by that distance, parallel to it.
+      for (const side of beside > 0 ? [-1, 1] : [0]) {
+        const shift = side * (beside + hh);
+        const x = px - uy * shift, y = py + ux * shift;
+        out.push({
+          x,
+          y,
+          rotate: (-angle * 180) / Math.PI,
+          box: box(x - uy * inkOffset, y + ux * inkOffset, half, hh, angle),
+          piece,
+          at,
+        });
+      }
     }
   });
   return out;

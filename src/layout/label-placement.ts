@@ -2,7 +2,7 @@
 // crowded the spot is and how well it lines up with its family; chosen greedily, never overlapping.
 
 import type { FontWeight } from "../render/fonts.js";
-import { measureText } from "../render/fonts.js";
+import { runMetrics } from "./font-metrics.js";
 import { boxInside, grow, type Box, type Rect } from "./geometry.js";
 import { labelCandidates, type Candidate } from "./label-candidates.js";
 import { SpatialGrid } from "./spatial-grid.js";
@@ -24,6 +24,10 @@ export interface LabelRequest {
   prefer: (x: number, y: number) => number;
   /** Labels of a family line up across their lines: in a row (same height) or a column (same x). */
   align: "row" | "column";
+  /** Set the label this far (mm) beside its line instead of on it, so the line stays unbroken. */
+  beside?: number;
+  /** Written on the label's mark (e.g. the line's quantity and SI value), so a reader can pair them. */
+  data?: Record<string, string>;
 }
 
 export interface PlacedLabel {
@@ -39,8 +43,8 @@ export interface PlacementReport {
   placed: number;
   /** Labels wanted but not placed (further labels on long lines included). */
   dropped: number;
-  /** Lines that got no label at all. */
-  unlabelled: string[];
+  /** Lines that got no label at all, even with relaxed rules; the sheet leaves them out. */
+  unlabelled: { owner: string; text: string }[];
 }
 
 export interface PlacementInput {
@@ -71,7 +75,7 @@ interface Scored {
 }
 
 function shapeOf(request: LabelRequest, halo: number) {
-  const metrics = measureText(request.text, request.sizePt, request.weight);
+  const metrics = runMetrics(request.text, request.sizePt, request.weight);
   return { ...metrics, pad: halo };
 }
 
@@ -84,12 +88,16 @@ export class LabelPlacer {
     this.boxes = new SpatialGrid(10);
   }
 
+  /** Relaxed rules (second pass) halve the clearances to the frame and to other labels. */
+  private relax = 1;
+
   private feasible(c: Candidate, request: LabelRequest): boolean {
     const { input } = this;
-    if (!boxInside(c.box, input.region, input.inset)) return false;
-    if (this.boxes.hitsBox(grow(c.box, input.clearance))) return false;
+    if (!boxInside(c.box, input.region, input.inset * this.relax)) return false;
+    if (this.boxes.hitsBox(grow(c.box, input.clearance * this.relax))) return false;
     if (input.obstacles.hitsBox(c.box)) return false;
-    return !input.obstacles.hitsOwners(c.box, input.hardOwners, request.owner);
+    // A label set beside its own line must not touch it either; one on its line sits on it by design.
+    return !input.obstacles.hitsOwners(c.box, input.hardOwners, request.beside ? undefined : request.owner);
   }
 
   private score(c: Candidate, request: LabelRequest): number {
@@ -121,21 +129,36 @@ export class LabelPlacer {
     this.familyAnchors.set(request.family, anchors);
   }
 
-  /** First every line's one required label (priority order), then further labels on long lines. */
+  /**
+   * First every line's one required label (priority order); then, for lines still without one, a pass
+   * with relaxed rules (more bend under the text, half the clearances, finer steps); then further labels
+   * on long lines.
+   */
   run(): { labels: PlacedLabel[]; report: PlacementReport } {
     const requests = [...this.input.requests].sort((a, b) => a.priority - b.priority);
     const candidates = new Map<LabelRequest, Candidate[]>();
     const first = new Map<LabelRequest, Candidate>();
-    const unlabelled: string[] = [];
+    const shapes = new Map(requests.map((r) => [r, shapeOf(r, this.input.halo)]));
     for (const request of requests) {
-      const list = labelCandidates(request.pieces, shapeOf(request, this.input.halo), STEP);
+      const list = labelCandidates(request.pieces, shapes.get(request)!, STEP, request.beside ?? 0);
       candidates.set(request, list);
       const chosen = this.best(request, list);
       if (chosen) {
         this.commit(request, chosen.candidate);
         first.set(request, chosen.candidate);
-      } else unlabelled.push(`${request.family} ${request.text}`);
+      }
     }
+    this.relax = 0.5;
+    const unlabelled: { owner: string; text: string }[] = [];
+    for (const request of requests) {
+      if (first.has(request)) continue;
+      const chosen = this.best(request, labelCandidates(request.pieces, shapes.get(request)!, STEP / 2, request.beside ?? 0, 0.7));
+      if (chosen) {
+        this.commit(request, chosen.candidate);
+        first.set(request, chosen.candidate);
+      } else unlabelled.push({ owner: request.owner, text: `${request.family} ${request.text}` });
+    }
+    this.relax = 1;
     let dropped = unlabelled.length;
     for (const request of requests) {
       const taken = first.get(request);

@@ -48,6 +48,8 @@ export interface LineLabelStyle {
   sizePt: number;
   weight: "normal" | "bold";
   perLine: number;
+  /** Gap between the dome and its labels, which stand beside it so the dome is never broken. */
+  domeGap: number;
 }
 
 export interface DrawnLine {
@@ -129,5 +131,7 @@ export function labelRequests(drawn: DrawnLine[], units: DisplayUnits, glide: bo
     wanted: d.family === "dome" ? 1 : wanted(d.pieces, frame, style.perLine),
     prefer: prefer(d.family, d.line),
     align: d.family === "isochore" ? "column" : "row",
+    ...(d.family === "dome" ? { beside: style.domeGap } : {}),
+    data: { quantity: d.line.quantity, value: String(d.line.value) },
   }));
 }

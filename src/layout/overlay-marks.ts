@@ -3,7 +3,7 @@
 
 import type { Overlay } from "../cycle/overlay.js";
 import { box, clipPolyline, grow, boxInside, type Box, type Rect } from "./geometry.js";
-import { measureText } from "../render/fonts.js";
+import { runMetrics } from "./font-metrics.js";
 import type { Mark, Stroke } from "./scene.js";
 import type { ChartScales } from "./scales.js";
 import { toPage } from "./scales.js";
@@ -41,7 +41,7 @@ const AROUND: [number, number][] = [
 ];
 
 function pointLabel(x: number, y: number, label: string, style: OverlayStyle, frame: Rect, obstacles: SpatialGrid): { x: number; y: number; box: Box } | undefined {
-  const m = measureText(label, style.labelPt, "bold");
+  const m = runMetrics(label, style.labelPt, "bold");
   const hw = m.width / 2 + style.halo, hh = m.capHeight / 2 + style.halo;
   const reach = style.marker * 1.6;
   for (const [dx, dy] of AROUND) {

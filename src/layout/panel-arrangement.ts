@@ -15,7 +15,7 @@ export interface PlacedPanel {
 export interface PanelSet {
   /** Panels in reading order; the last of them is pushed to the bottom of its column. */
   fixed: Panel[];
-  /** The saturation table at a given thinning (1 = every row given, 2 = every other …), if asked for. */
+  /** The saturation table at a given thinning (1 = every row given, 2, 4 or 10 = rows at that multiple of the step), if asked for. */
   table?: (thinning: number) => Panel | undefined;
 }
 
@@ -27,7 +27,7 @@ export interface Arrangement {
 }
 
 const SHRINK = [1, 0.92, 0.85, 0.78, 0.72, 0.66, 0.6];
-const THINNING = [1, 2, 3, 4, 6, 8];
+const THINNING = [1, 2, 4, 10];
 
 function scaled(style: PanelStyle, factor: number): PanelStyle {
   return { ...style, pt: Math.max(MIN_TYPE_PT, style.pt * factor), titlePt: Math.max(MIN_TYPE_PT, style.titlePt * factor), padding: style.padding * Math.max(factor, 0.7) };
@@ -98,7 +98,7 @@ export function arrangePanels(set: PanelSet, area: Rect, gap: number, base: Pane
     for (const factor of SHRINK) {
       const style = scaled(base, factor);
       const placed = tryArrange(set.fixed, table, area, gap, style, arrangement);
-      if (placed) return { placed, style, omitted: thinning > 1 ? [`saturation table: one row in ${thinning} kept`] : [] };
+      if (placed) return { placed, style, omitted: thinning > 1 ? [`saturation table: rows at ${thinning} times the step`] : [] };
     }
   }
   for (const factor of SHRINK) {

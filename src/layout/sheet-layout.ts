@@ -4,7 +4,8 @@
 import { FONT_FAMILY } from "../render/fonts.js";
 import { axesMarks } from "./axes.js";
 import { axisTicks } from "./axis-ticks.js";
-import type { SheetContent } from "./content.js";
+import type { SaturationRow, SheetContent } from "./content.js";
+import { toDisplay } from "./display-units.js";
 import { box, rectBox } from "./geometry.js";
 import { gridMarks } from "./grid.js";
 import { placeLabels, type PlacementReport } from "./label-placement.js";
@@ -36,10 +37,16 @@ export interface LaidOutSheet {
   report: SheetReport;
 }
 
-/** Rows of the saturation table at a step of whole display degrees, `thinning` times the base step. */
-function tableRows(content: SheetContent, thinning: number) {
+/**
+ * Rows of the saturation table thinned to round steps: every row, or those at multiples of 2, 4 or 10
+ * times the given step (5 °C → 10, 20, 50 °C), so a shortened table still reads in round numbers.
+ */
+function tableRows(content: SheetContent, thinning: number): SaturationRow[] {
   const rows = content.saturationTable ?? [];
-  return rows.filter((_, i) => i % thinning === 0);
+  if (rows.length < 2 || thinning === 1) return rows;
+  const t = (r: SaturationRow) => Math.round(toDisplay(r.T, content.units.temperature) * 1000) / 1000;
+  const step = Math.abs(t(rows[1]!) - t(rows[0]!)) * thinning;
+  return rows.filter((r) => Math.abs(t(r) / step - Math.round(t(r) / step)) < 1e-6);
 }
 
 function familyStrokes(style: Style, plan: PagePlan): Record<Family, Stroke> {
@@ -115,8 +122,9 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
 
   const lines = new SpatialGrid(8);
   for (const d of drawn) for (const piece of d.pieces) lines.addPolyline(d.owner, piece);
-  const requests = labelRequests(drawn, units, fluid.glide, { sizePt: labelPt, weight: style.labels.weight, perLine: style.labels.perLine }, plan.plot, labelPreference(drawn, plan.plot));
+  const requests = labelRequests(drawn, units, fluid.glide, { sizePt: labelPt, weight: style.labels.weight, perLine: style.labels.perLine, domeGap: strokes.dome.width / 2 + sizes.mm(0.3) }, plan.plot, labelPreference(drawn, plan.plot));
   const placed = placeLabels({ requests, region: plan.plot, inset: sizes.mm(0.8), clearance: sizes.mm(style.labels.clearance), lines, obstacles, hardOwners, halo: haloMm });
+  const unlabelled = new Set(placed.report.unlabelled.map((u) => u.owner));
   const labelMarks: Mark[] = placed.labels.map((l) =>
     text(l.x, l.y, l.request.text, l.request.sizePt, style.labelInk[l.request.family as Family], {
       anchor: "middle",
@@ -124,7 +132,7 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
       rotate: Math.round(l.rotate * 100) / 100,
       weight: l.request.weight,
       halo: { colour: style.page.background, width: haloMm },
-      data: { family: l.request.family },
+      data: { family: l.request.family, ...l.request.data },
     }),
   );
 
@@ -132,7 +140,8 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
   const axisInk = { ink: style.page.ink, stroke: frameStroke };
   const layers: Layer[] = [
     { id: "grid", label: "Reading grid", marks: gridMarks(ticks, scales, sizes.stroke(style.grid.major), sizes.stroke(style.grid.minor)) },
-    ...lineLayers(drawn, strokes),
+    // A line whose label found no room is left out: every isoline drawn carries its value.
+    ...lineLayers(drawn.filter((d) => !unlabelled.has(d.owner)), strokes),
     { id: "critical-point", label: "Critical point", marks: criticalMarks },
     { id: "cycles", label: "Cycles and readings", marks: overlay.marks },
     { id: "labels", label: "Line labels", marks: labelMarks },

@@ -1,7 +1,8 @@
 // Setting running text in panels: measured words wrapped to a width, line spacing, and number format.
 // Measurement comes from the renderers' own font metrics, so what fits here fits on the page.
 
-import { measureText, type FontWeight } from "../render/fonts.js";
+import type { FontWeight } from "../render/fonts.js";
+import { runMetrics } from "./font-metrics.js";
 import { MM_PER_PT } from "./scene.js";
 
 /** Leading as a multiple of the type size: open enough for 6 pt to read on a plant-room wall. */
@@ -11,17 +12,12 @@ export function lineHeight(sizePt: number): number {
   return sizePt * MM_PER_PT * LEADING;
 }
 
-const widths = new Map<string, number>();
-
-/** Advance width in mm, cached: panels measure the same words many times while they are fitted. */
+/**
+ * Advance width in mm, from per-character advances (no kerning): panels measure thousands of runs while
+ * they are fitted, and kerning moves these figures by far less than the padding every panel keeps.
+ */
 export function textWidth(text: string, sizePt: number, weight: FontWeight = "normal"): number {
-  const key = `${weight}|${sizePt}|${text}`;
-  let width = widths.get(key);
-  if (width === undefined) {
-    width = measureText(text, sizePt, weight).width;
-    widths.set(key, width);
-  }
-  return width;
+  return runMetrics(text, sizePt, weight).width;
 }
 
 /** Greedy line filling; a word longer than the width is broken between characters rather than overflow. */

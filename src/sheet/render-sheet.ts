@@ -58,7 +58,16 @@ function fileStem(designation: string, paper: string, orientation: string): stri
   return `${designation}_${paper}_${orientation}`.replace(/[^A-Za-z0-9._-]+/g, "-");
 }
 
-export async function renderSheet(options: SheetOptions): Promise<RenderedSheet> {
+export interface ComposedSheet {
+  scene: Scene;
+  report: SheetReport;
+  content: SheetContent;
+  options: CheckedSheetOptions;
+  name: string;
+}
+
+/** Everything up to the Scene: page plan, engine data, layout. No rendering, so tests can check layouts fast. */
+export function composeSheet(options: SheetOptions): ComposedSheet {
   const o: CheckedSheetOptions = checkSheetOptions(options);
   const style: Style = typeof options.style === "object" ? options.style : loadStyle(options.style);
   const units = displayUnits(o.units, o.pressure);
@@ -94,13 +103,19 @@ export async function renderSheet(options: SheetOptions): Promise<RenderedSheet>
   };
   const laid = layoutSheet(plan, content, style);
   const scene: Scene = { ...laid.scene, bleed: o.bleed, cropMarks: o.cropMarks };
-  const out: RenderedSheet = { scene, report: laid.report, name: fileStem(identity.designation, paper.name, orientation) };
+  return { scene, report: laid.report, content, options: o, name: fileStem(identity.designation, paper.name, orientation) };
+}
+
+export async function renderSheet(options: SheetOptions): Promise<RenderedSheet> {
+  const sheet = composeSheet(options);
+  const { scene, content, options: o } = sheet;
+  const out: RenderedSheet = { scene, report: sheet.report, name: sheet.name };
   const wants = (f: Format) => o.formats.includes(f);
   if (wants("svg")) out.svg = Buffer.from(renderSvg(scene), "utf8");
   if (wants("pdf")) out.pdf = await renderPdf(scene, { cmyk: o.cmyk });
   if (wants("png")) out.png = renderPng(scene, { dpi: o.dpi });
   if (wants("json")) {
-    const json = { format: "domeprint-sheet-data/1", sheet: scene.meta.attributes, fluid: identity, report: laid.report, saturationTable: content.saturationTable ?? null, lines: lineSetToJson(data.lines) };
+    const json = { format: "domeprint-sheet-data/1", sheet: scene.meta.attributes, fluid: content.fluid, report: sheet.report, saturationTable: content.saturationTable ?? null, lines: lineSetToJson(content.lines) };
     out.json = Buffer.from(`${JSON.stringify(json)}\n`, "utf8");
   }
   return out;
