@@ -18,7 +18,7 @@ export function levelRow(fmt: Formatter, l: ResolvedLevel, pseudoPure: boolean):
     const T = fmt.withUnit("temperature", l.given.T);
     return pseudoPure ? `${T} at the ${GLIDE_TEXT[l.glidePoint!]} → ${p} (${sat})` : `${T} → ${p}`;
   }
-  return `${p} as given (${sat})`;
+  return `${p}, given as a pressure (${sat})`;
 }
 
 function marginText(fmt: Formatter, pt: CyclePoint): string {

@@ -21,7 +21,7 @@ export interface ResolvedLevel {
   /** The input's name, e.g. "evaporating". */
   input: string;
   given: Level;
-  /** The glide point a temperature was read at; null for a level given as a pressure. */
+  /** The glide point a temperature was read at; null for a level given as a pressure, or for a pure fluid. */
   glidePoint: GlidePoint | null;
   /** Absolute pressure [Pa]. */
   p: number;
@@ -69,7 +69,7 @@ export function resolveLevel(f: Fluid, input: string, level: Level, defaultPoint
   try {
     const p = "T" in level ? pressureAtTemperature(f, input, level.T, glidePoint!) : resolvePressure(f, input, level.p);
     const sat = saturationP(f, p);
-    return { input, given: level, glidePoint, p, bubble: sat.TL, dew: sat.TV };
+    return { input, given: level, glidePoint: f.pseudoPure ? glidePoint : null, p, bubble: sat.TL, dew: sat.TV };
   } catch (e) {
     if (!(e instanceof DomeprintError) || e.details.input === input || e.code === "E_CONVERGENCE") throw e;
     const shown = "T" in level ? temperatureText(level.T) : pressureText(level.p);
