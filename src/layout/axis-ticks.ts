@@ -6,7 +6,7 @@ import type { SaturationTick } from "./content.js";
 import { toDisplay, type DisplayUnits } from "./display-units.js";
 import type { PagePlan } from "./plan.js";
 import type { ChartScales } from "./scales.js";
-import { logLadder, logValues, minorStep, multiples, rankBySteps, roundStep, thinTicks, type TickCandidate } from "./ticks.js";
+import { FINEST_LABEL_LADDER, logLadder, logValues, minorStep, multiples, rankBySteps, roundStep, thinTicks, type TickCandidate } from "./ticks.js";
 
 export interface LinearTicks {
   /** Labelled values, SI. */
@@ -54,7 +54,7 @@ function enthalpyTicks(scales: ChartScales, unit: Unit, plan: PagePlan, gridSpac
 function pressureTicks(scales: ChartScales, unit: Unit, plan: PagePlan, gridSpacing: number): LogTicks {
   const lo = toDisplay(scales.window.pMin, unit), hi = toDisplay(scales.window.pMax, unit);
   const decade = scales.frame.height / Math.log10(hi / lo);
-  const labels = logLadder(decade, plan.axis.labelHeight * 1.35);
+  const labels = logLadder(decade, plan.axis.labelHeight * 1.35, FINEST_LABEL_LADDER);
   // The grid never gets coarser than the labels, or a label would sit on no line.
   const fine = logLadder(decade, gridSpacing);
   const grid = fine.length >= labels.length ? fine : labels;
@@ -76,7 +76,8 @@ function temperatureMarks(ticks: SaturationTick[], pressureOf: (t: SaturationTic
     candidates.push({ value: t.t, at: scales.y(p), rank: rankBySteps(t.t, TEMPERATURE_STEPS) });
   }
   const inside = candidates.filter((c) => c.at >= frame.y && c.at <= frame.y + frame.height);
-  const labelled = new Set(thinTicks(inside, plan.axis.labelHeight * 1.2).map((c) => c.value));
+  // Labels only at multiples of 5 degrees; whole degrees between them get ticks where there is room.
+  const labelled = new Set(thinTicks(inside.filter((c) => c.rank <= 2), plan.axis.labelHeight * 1.2).map((c) => c.value));
   return thinTicks(inside, plan.sizes.mm(0.9)).map((c) => ({ value: c.value, y: c.at, labelled: labelled.has(c.value) }));
 }
 
@@ -102,7 +103,7 @@ function gaugeMarks(scales: ChartScales, unit: Unit, atmosphere: number, plan: P
   for (const g of multiples(-atm + vacuumStep / 10, -vacuumStep / 10, vacuumStep / 10)) add(g, rankBySteps(g, [vacuumStep * 5, vacuumStep, vacuumStep / 2]) + 1);
   const { frame } = scales;
   const inside = candidates.filter((c) => c.at >= frame.y && c.at <= frame.y + frame.height);
-  const labelled = new Set(thinTicks(inside, plan.axis.labelHeight * 1.2).map((c) => c.value));
+  const labelled = new Set(thinTicks(inside.filter((c) => c.rank <= 2), plan.axis.labelHeight * 1.2).map((c) => c.value));
   return thinTicks(inside, plan.sizes.mm(1.2)).map((c) => ({ value: c.value, y: c.at, labelled: labelled.has(c.value) }));
 }
 

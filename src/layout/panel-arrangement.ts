@@ -33,13 +33,36 @@ function scaled(style: PanelStyle, factor: number): PanelStyle {
   return { ...style, pt: Math.max(MIN_TYPE_PT, style.pt * factor), titlePt: Math.max(MIN_TYPE_PT, style.titlePt * factor), padding: style.padding * Math.max(factor, 0.7) };
 }
 
-/** Splits the panels into columns for a band: identity and key, cautions and source, then the tables. */
-function bandColumns(panels: Panel[], table: Panel | undefined): Panel[][] {
-  const byId = (prefix: string) => panels.filter((p) => p.id.startsWith(prefix));
-  const columns = [[...byId("title-block"), ...byId("key")], [...byId("cautions"), ...byId("source")]];
-  const tables = [...byId("overlay-"), ...(table ? [table] : [])];
-  if (tables.length > 0) columns.push(tables);
-  return columns;
+/** Every way of dealing the panels (in order) into `count` columns; panels are few, so all are tried. */
+function deals(panels: Panel[], count: number): Panel[][][] {
+  if (panels.length === 0) return [Array.from({ length: count }, () => [])];
+  const out: Panel[][][] = [];
+  for (const rest of deals(panels.slice(1), count)) {
+    for (let c = 0; c < count; c++) out.push(rest.map((col, i) => (i === c ? [panels[0]!, ...col] : col)));
+  }
+  return out;
+}
+
+/**
+ * Columns for a band: the tables in a column of their own, the other panels dealt into two columns so
+ * the taller of them is as short as it can be.
+ */
+function bandColumns(panels: Panel[], table: Panel | undefined, width: number, gap: number, style: PanelStyle): Panel[][] {
+  const tables = [...panels.filter((p) => tableItem(p)), ...(table ? [table] : [])];
+  const others = panels.filter((p) => !tableItem(p));
+  const tableWidthMm = Math.max(0, ...tables.map((t) => tableWidth(tableItem(t)!, style)));
+  const free = tables.length > 0 ? (width - tableWidthMm - 2 * gap) / 2 : (width - gap) / 2;
+  const heights = new Map(others.map((p) => [p, panelHeight(p, style, free)]));
+  let best: Panel[][] = [others, []];
+  let bestHeight = Infinity;
+  for (const deal of deals(others, 2)) {
+    const tallest = Math.max(...deal.map((col) => col.reduce((sum, p) => sum + heights.get(p)! + gap, 0)));
+    if (tallest < bestHeight) {
+      bestHeight = tallest;
+      best = deal;
+    }
+  }
+  return tables.length > 0 ? [...best, tables] : best;
 }
 
 function stack(column: Panel[], area: Rect, gap: number, style: PanelStyle): PlacedPanel[] | undefined {
@@ -77,7 +100,7 @@ function tryArrange(fixed: Panel[], table: Panel | undefined, area: Rect, gap: n
     if (widest > area.width + 1e-6) return undefined;
     return stack(all, area, gap, style);
   }
-  const columns = bandColumns(fixed, table);
+  const columns = bandColumns(fixed, table, area.width, gap, style).filter((c) => c.length > 0);
   const widths = columnWidths(columns, area, gap, style);
   if (!widths) return undefined;
   const placed: PlacedPanel[] = [];

@@ -11,6 +11,7 @@ import { gridMarks } from "./grid.js";
 import { placeLabels, type PlacementReport } from "./label-placement.js";
 import { labelPreference } from "./label-preference.js";
 import { drawnLines, labelRequests, lineLayers } from "./line-marks.js";
+import { thinLines } from "./line-thinning.js";
 import { rect, text } from "./marks.js";
 import { sceneMeta } from "./sheet-meta.js";
 import { overlayMarks } from "./overlay-marks.js";
@@ -75,7 +76,9 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
   const scales = chartScales(content.lines.window, plan.plot);
   const ticks = axisTicks(scales, units, plan, content.saturationScale, fluid.glide, sizes.mm(style.grid.spacing), content.gauge?.atmosphere);
   const strokes = familyStrokes(style, plan);
-  const drawn = drawnLines(content.lines, scales);
+  // Lines closer than about 7 mm (isotherms) or 9 mm (isentropes, isochores) at A4 crowd out their labels.
+  const budget = { temperature: Math.floor(plan.plot.width / sizes.mm(7)), entropy: Math.floor(plan.plot.width / sizes.mm(9)), "specific-volume": Math.floor(plan.plot.height / sizes.mm(9)) };
+  const drawn = drawnLines({ ...content.lines, lines: thinLines(content.lines.lines, units, budget) }, scales);
 
   // Panels first: their rectangles are obstacles for everything placed later.
   const families = new Set(drawn.map((d) => d.family));

@@ -58,12 +58,20 @@ export const LOG_LADDERS: { mantissas: number[]; gap: number }[] = [
   },
 ];
 
-/** The finest ladder whose narrowest gap is at least `minGap` mm when a decade is `decadeMm` long. */
-export function logLadder(decadeMm: number, minGap: number): number[] {
+/**
+ * The finest ladder whose narrowest gap is at least `minGap` mm when a decade is `decadeMm` long, up to
+ * ladder `finest` (labels stop at halves: a scale reading 42.5, 47.5 is harder to read, not easier).
+ */
+export function logLadder(decadeMm: number, minGap: number, finest = LOG_LADDERS.length - 1): number[] {
   let chosen = LOG_LADDERS[0]!.mantissas;
-  for (const ladder of LOG_LADDERS) if (ladder.gap * decadeMm >= minGap) chosen = ladder.mantissas;
+  LOG_LADDERS.forEach((ladder, i) => {
+    if (i <= finest && ladder.gap * decadeMm >= minGap) chosen = ladder.mantissas;
+  });
   return chosen;
 }
+
+/** Index of the finest ladder used for labels. */
+export const FINEST_LABEL_LADDER = 4;
 
 /** Values m × 10^k inside [min, max] for the ladder's mantissas m. */
 export function logValues(min: number, max: number, mantissas: number[]): number[] {
