@@ -19,7 +19,7 @@ export const CAUTION = "Caution: computed from the stated assumptions; check eve
 interface Options {
   evaporating?: string; condensing?: string; glidePoint: string; superheat?: string; subcooling?: string;
   efficiency?: string; dischargeTemperature?: string; suctionDrop?: string; dischargeDrop?: string;
-  ihx?: string; flashTank?: boolean; economiser?: boolean; intermediate?: string; economiserApproach?: string;
+  ihx?: string; flashTank?: boolean; openIntercooler?: boolean; economiser?: boolean; intermediate?: string; economiserApproach?: string;
   gasCoolerOutlet?: string; highPressure?: string; optimiseHighPressure?: boolean; highPressureBounds?: string;
   capacity?: string; reference: string; units: string; altitude?: string; readings?: string; json?: boolean;
 }
@@ -112,9 +112,9 @@ function bounds(text: string, atmosphere: number): [number, number] {
 /** Picks the model from the options given and computes it. */
 export function runCycle(fluid: string, o: Options, atmosphere: number): CycleResult {
   const transcritical = o.gasCoolerOutlet !== undefined || o.highPressure !== undefined || o.optimiseHighPressure;
-  const twoStage = o.flashTank || o.economiser;
+  const arrangements = ([["flashTank", "flash-tank"], ["openIntercooler", "open-intercooler"], ["economiser", "economiser"]] as const).filter(([k]) => o[k]);
   if (transcritical) {
-    forbid(o, ["condensing", "subcooling", "flashTank", "economiser", "intermediate", "economiserApproach"], "in a transcritical cycle (no condenser; single stage)");
+    forbid(o, ["condensing", "subcooling", "flashTank", "openIntercooler", "economiser", "intermediate", "economiserApproach"], "in a transcritical cycle (no condenser; single stage)");
     const spec = {
       ...common(o, atmosphere), fluid, compressor: compressorOf(o),
       gasCoolerOutlet: parseQuantity("--gas-cooler-outlet", "temperature", required("--gas-cooler-outlet", o.gasCoolerOutlet, "the gas-cooler outlet temperature (e.g. 35C)")),
@@ -132,19 +132,20 @@ export function runCycle(fluid: string, o: Options, atmosphere: number): CycleRe
   const condensing = parseLevel("--condensing", required("--condensing", o.condensing, "a condensing temperature or pressure (e.g. 40C), or --gas-cooler-outlet with --high-pressure for a transcritical cycle"), atmosphere);
   const subcooling = parseDifference("--subcooling", o.subcooling);
   const sc = subcooling === undefined ? {} : { subcooling };
-  if (twoStage) {
-    if (o.flashTank && o.economiser) throw usage("--economiser", true, "given with --flash-tank", "one of --flash-tank or --economiser");
+  if (arrangements.length) {
+    if (arrangements.length > 1) throw usage(`--${arrangements[1]![1]}`, true, `given with --${arrangements[0]![1]}`, "one of --flash-tank, --open-intercooler or --economiser");
+    const arrangement = arrangements[0]![1];
     forbid(o, ["ihx"], "in a two-stage cycle");
-    if (o.flashTank) forbid(o, ["economiserApproach"], "with a flash tank");
+    if (arrangement !== "economiser") forbid(o, ["economiserApproach"], "without an economiser");
     const [lowStage, highStage] = stageCompressors(o);
     const approach = parseDifference("--economiser-approach", o.economiserApproach);
     return twoStageCycle({
-      ...common(o, atmosphere), fluid, condensing, ...sc, lowStage, highStage, arrangement: o.flashTank ? "flash-tank" : "economiser",
+      ...common(o, atmosphere), fluid, condensing, ...sc, lowStage, highStage, arrangement,
       ...(o.intermediate !== undefined ? { intermediate: parseLevel("--intermediate", o.intermediate, atmosphere) } : {}),
       ...(approach !== undefined ? { economiserApproach: approach } : {}),
     });
   }
-  forbid(o, ["intermediate", "economiserApproach"], "without --flash-tank or --economiser");
+  forbid(o, ["intermediate", "economiserApproach"], "in a single-stage cycle (two stages: --flash-tank, --open-intercooler or --economiser)");
   return singleStageCycle({
     ...common(o, atmosphere), fluid, condensing, ...sc, compressor: compressorOf(o),
     ...(o.ihx !== undefined ? { ihx: parseEfficiency("--ihx", o.ihx) } : {}),
@@ -203,7 +204,7 @@ function readingsText(r: ReadingsResult, units: DisplayUnits): string {
 }
 
 const CYCLE_OPTIONS: (keyof Options)[] = ["evaporating", "condensing", "superheat", "subcooling", "efficiency", "dischargeTemperature", "suctionDrop", "dischargeDrop", "ihx",
-  "flashTank", "economiser", "intermediate", "economiserApproach", "gasCoolerOutlet", "highPressure", "optimiseHighPressure", "highPressureBounds", "capacity"];
+  "flashTank", "openIntercooler", "economiser", "intermediate", "economiserApproach", "gasCoolerOutlet", "highPressure", "optimiseHighPressure", "highPressureBounds", "capacity"];
 
 function runReadings(io: Io, fluid: string, o: Options, units: DisplayUnits): void {
   forbid(o, CYCLE_OPTIONS, "with --readings (a readings file is evaluated on its own)");
@@ -234,6 +235,7 @@ export function registerCycle(program: Command, io: Io, setCode: (c: number) => 
     .option("--discharge-drop <dp>", "discharge line pressure drop (e.g. 0.3bar)")
     .option("--ihx <effectiveness>", "internal (suction–liquid) heat exchanger of this effectiveness, 0 to 1")
     .option("--flash-tank", "two-stage with a flash tank at the intermediate pressure")
+    .option("--open-intercooler", "two-stage with an open flash intercooler: the flash tank also desuperheats the low-stage discharge")
     .option("--economiser", "two-stage with an economiser (subcooler) at the intermediate pressure")
     .option("--intermediate <level>", "intermediate temperature or pressure (default: geometric mean of the pressures)")
     .option("--economiser-approach <dT>", "economiser liquid outlet above its injection inlet temperature (default 5K)")
@@ -249,7 +251,7 @@ export function registerCycle(program: Command, io: Io, setCode: (c: number) => 
     .option("--json", "print JSON in SI base units instead of a table")
     .addHelpText("after", `
 Models: single-stage (--condensing), with an internal heat exchanger (--ihx), two-stage
-(--flash-tank or --economiser), transcritical (--gas-cooler-outlet with --high-pressure or
+(--flash-tank, --open-intercooler or --economiser), transcritical (--gas-cooler-outlet with --high-pressure or
 --optimise-high-pressure). For blends a temperature level is read at the dew point unless
 --glide-point says otherwise; superheat counts from the dew point, subcooling from the bubble point.
 JSON (SI): T K, p Pa, h J/kg, s J/(kg K), volumetric capacity J/m³, power W, mass flow kg/s, volume flow m³/s.

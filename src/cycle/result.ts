@@ -6,11 +6,12 @@ import type { PathPoint } from "./path.js";
 import type { Performance, Stage } from "./performance.js";
 import type { CyclePoint } from "./point.js";
 
-export type CycleModel = "single-stage" | "two-stage-flash-tank" | "two-stage-economiser" | "transcritical";
+export type CycleModel = "single-stage" | "two-stage-flash-tank" | "two-stage-open-intercooler" | "two-stage-economiser" | "transcritical";
 
 export const MODEL_TEXT: Record<CycleModel, string> = {
   "single-stage": "single-stage vapour compression",
   "two-stage-flash-tank": "two-stage vapour compression with flash tank",
+  "two-stage-open-intercooler": "two-stage vapour compression with open flash intercooler",
   "two-stage-economiser": "two-stage vapour compression with economiser",
   transcritical: "transcritical single-stage cycle",
 };

@@ -1,5 +1,5 @@
 // Two-stage vapour compression with an intermediate pressure (default: geometric mean of evaporating
-// and condensing pressures), either with a flash tank or with an economiser (subcooler) heat exchanger.
+// and condensing pressures): with a flash tank, an open flash intercooler, or an economiser (subcooler).
 import { flashPX, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
 import { chainPoints, makePoint, type ChainStep } from "./chain.js";
 import { requireRefrigeratingEffect } from "./circuit-checks.js";
@@ -13,7 +13,11 @@ import { mix, subcooledLiquid, superheatedVapour, throttle } from "./processes.j
 import type { CycleResult } from "./result.js";
 import { commonInputs, commonNotes, levelText, lineDrops, requireBelow, type CommonSpec } from "./spec.js";
 
-export type Arrangement = "flash-tank" | "economiser";
+/**
+ * flash-tank: the tank's flash gas mixes with the low-stage discharge. open-intercooler: the low-stage
+ * discharge also bubbles through the tank's liquid and leaves it saturated. economiser: a closed subcooler.
+ */
+export type Arrangement = "flash-tank" | "open-intercooler" | "economiser";
 
 /**
  * How far the economiser's liquid outlet stays above the temperature of the injected refrigerant
@@ -96,6 +100,34 @@ function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, 
   return { steps, branch, branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
 }
 
+/**
+ * Open flash intercooler: the condenser liquid flashes in the tank and the low-stage discharge is
+ * desuperheated in its liquid, so saturated vapour goes to the high stage. The tank's energy balance
+ * sets the high-stage flow: m_high (h_vapour − h_condenser-outlet) = h_low-discharge − h_liquid.
+ */
+function openIntercooler(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
+  const pi = L.intermediate.p;
+  const tankIn = throttle(f, c.condOut, pi, ref);
+  const tankLiquid = flashPX(f, pi, 0, ref);
+  const tankVapour = flashPX(f, pi, 1, ref);
+  if (!(c.condOut.h < tankVapour.h)) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the condenser liquid would arrive in the tank as vapour", "an intermediate level where the condenser liquid stays partly liquid");
+  const highFlow = (c.low.discharge.h - tankLiquid.h) / (tankVapour.h - c.condOut.h);
+  const high = compress(f, tankVapour, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
+  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const steps: ChainStep[] = [
+    ...lowSteps(c),
+    { state: tankVapour, role: "high-stage-suction", flow: highFlow, process: "isobaric" },
+    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
+    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
+    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    { state: tankIn, role: "flash-tank-inlet", flow: highFlow, process: "isenthalpic" },
+    { state: tankLiquid, role: "flash-tank-liquid", flow: 1, process: "isobaric" },
+    { state: throttle(f, tankLiquid, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
+  ];
+  const notes = ["open flash intercooler: the condenser liquid flashes at the intermediate pressure and the low-stage discharge is desuperheated in the tank's liquid; saturated vapour goes to the high stage, saturated liquid to the evaporator"];
+  return { steps, branch: [], branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
+}
+
 /** Economiser: part of the condenser liquid, throttled to the intermediate pressure, subcools the rest and is injected into the high stage. */
 function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
   const pi = L.intermediate.p;
@@ -144,7 +176,8 @@ export function twoStageCycle(spec: TwoStageSpec): CycleResult {
   const L = resolveLevels(f, spec);
   const drops = lineDrops(spec, L.evaporating.p, L.condensing.p);
   const c = commonStates(f, ref, spec, L, superheat, subcooling, drops.suction);
-  const b = spec.arrangement === "flash-tank" ? flashTank(f, ref, spec, L, c, drops.discharge) : economiser(f, ref, spec, L, c, drops.discharge);
+  const build = { "flash-tank": flashTank, "open-intercooler": openIntercooler, economiser }[spec.arrangement];
+  const b = build(f, ref, spec, L, c, drops.discharge);
   const main = chainPoints(f, b.steps);
   const side = chainPoints(f, b.branch, main.points.length + 1);
   const points = [...main.points, ...side.points];
@@ -162,7 +195,7 @@ export function twoStageCycle(spec: TwoStageSpec): CycleResult {
   const path = tracePath(f, c.evapOut, [...main.legs, { to: c.evapOut, process: "isobaric" }], ref);
   path.pop();
   const result: CycleResult = {
-    model: spec.arrangement === "flash-tank" ? "two-stage-flash-tank" : "two-stage-economiser",
+    model: `two-stage-${spec.arrangement}`,
     fluid: f.id, blend: f.pseudoPure, reference: ref, levels: L, superheat, subcooling, drops,
     notes: [...commonNotes(f), "both stages from their isentropic efficiencies or discharge temperatures", ...b.notes],
     points, auxiliary: stages.map((s) => s.isentropic), stages, performance, path,

@@ -22,6 +22,7 @@ const singles: [string, SingleStageSpec][] = [
 
 const twos: [string, TwoStageSpec][] = [
   ["ammonia −35/35 °C flash tank", { fluid: "ammonia", evaporating: { T: C(-35) }, condensing: { T: C(35) }, superheat: 2, arrangement: "flash-tank", lowStage: { efficiency: 0.7 }, highStage: { efficiency: 0.75 }, capacity: 50e3 }],
+  ["ammonia −35/35 °C open flash intercooler, drops", { fluid: "ammonia", evaporating: { T: C(-35) }, condensing: { T: C(35) }, superheat: 3, subcooling: 2, arrangement: "open-intercooler", suctionDrop: 0.05 * bar, dischargeDrop: 0.2 * bar, lowStage: { efficiency: 0.7 }, highStage: { efficiency: 0.72 }, capacity: 50e3 }],
   ["R404A −40/40 °C economiser, drops", { fluid: "R404A", evaporating: { T: C(-40) }, condensing: { T: C(40) }, superheat: 5, subcooling: 2, arrangement: "economiser", economiserApproach: 4, suctionDrop: 0.1 * bar, dischargeDrop: 0.2 * bar, lowStage: { efficiency: 0.65 }, highStage: { efficiency: 0.7 } }],
   ["R134a economiser at a given intermediate temperature", { fluid: "R134a", evaporating: { T: C(-25) }, condensing: { T: C(45) }, intermediate: { T: C(5) }, arrangement: "economiser", lowStage: { efficiency: 0.7 }, highStage: { dischargeTemperature: C(70) } }],
 ];
@@ -96,8 +97,19 @@ describe("side streams and heat exchangers balance", () => {
     expect(Math.abs(mixOut.flow - mixIn.flow - vapour.flow)).toBeLessThan(1e-12);
     expect(Math.abs(mixOut.flow * mixOut.state.h - (mixIn.flow * mixIn.state.h + vapour.flow * vapour.state.h)) / (mixOut.flow * mixOut.state.h)).toBeLessThan(1e-9);
   });
-  it("economiser: heat from the main liquid = heat to the injected stream; outlet = injection inlet + approach", () => {
+  it("open flash intercooler: condenser liquid and low-stage discharge in = saturated vapour and liquid out", () => {
     const r = twoStageCycle(twos[1]![1]);
+    const f = getFluid(r.fluid);
+    const pi = r.levels.intermediate!.p;
+    const low = at(r, "low-stage-discharge"), inlet = at(r, "flash-tank-inlet"), liquid = at(r, "flash-tank-liquid"), vapour = at(r, "high-stage-suction");
+    const hin = low.flow * low.state.h + inlet.flow * inlet.state.h, hout = vapour.flow * vapour.state.h + liquid.flow * liquid.state.h;
+    expect(Math.abs(hin - hout) / hin).toBeLessThan(1e-12);
+    expect(Math.abs(low.flow + inlet.flow - vapour.flow - liquid.flow)).toBeLessThan(1e-12);
+    expect(Math.abs(vapour.state.h - flashPX(f, pi, 1).h)).toBeLessThan(1e-6);
+    expect(Math.abs(liquid.state.h - flashPX(f, pi, 0).h)).toBeLessThan(1e-6);
+  });
+  it("economiser: heat from the main liquid = heat to the injected stream; outlet = injection inlet + approach", () => {
+    const r = twoStageCycle(twos[2]![1]);
     const cond = at(r, "condenser-outlet"), out = at(r, "economiser-liquid-outlet"), injIn = at(r, "economiser-injection-inlet"), injOut = at(r, "economiser-injection-outlet");
     const main = out.flow * (cond.state.h - out.state.h), side = injIn.flow * (injOut.state.h - injIn.state.h);
     expect(Math.abs(main - side) / main).toBeLessThan(1e-9);
