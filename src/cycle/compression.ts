@@ -2,7 +2,7 @@
 // efficiency or by a measured discharge temperature (from which the efficiency follows).
 import { DomeprintError } from "../errors.js";
 import { flashPH, flashPS, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
-import { cycleInputError, requireEfficiency, temperatureText } from "./check.js";
+import { cycleInputError, pressureText, requireEfficiency, temperatureText } from "./check.js";
 
 /** How the compressor is described: an isentropic efficiency in (0, 1], or the discharge temperature [K]. */
 export type Compressor = { efficiency: number } | { dischargeTemperature: number };
@@ -23,7 +23,7 @@ export interface Compression {
 
 /** `input` names the compressor's description in errors (e.g. "efficiency", "discharge-temperature"). */
 export function compress(f: Fluid, suction: State, pOut: number, c: Compressor, ref: ReferenceName, input = compressorInput(c)): Compression {
-  const isentropic = flashPS(f, pOut, suction.s, ref);
+  const isentropic = isentropicEnd(f, suction, pOut, ref, input, c);
   if ("efficiency" in c) {
     const eta = requireEfficiency(input, c.efficiency);
     const discharge = eta === 1 ? isentropic : dischargeAt(f, pOut, suction.h + (isentropic.h - suction.h) / eta, ref, input, eta);
@@ -36,6 +36,19 @@ export function compress(f: Fluid, suction: State, pOut: number, c: Compressor, 
   }
   const discharge = flashTP(f, T, pOut, ref);
   return { discharge, isentropic, efficiency: (isentropic.h - suction.h) / (discharge.h - suction.h) };
+}
+
+/** The isentropic end; a steep compression of a hot suction gas can end past the equation's upper temperature. */
+function isentropicEnd(f: Fluid, suction: State, pOut: number, ref: ReferenceName, input: string, c: Compressor): State {
+  try {
+    return flashPS(f, pOut, suction.s, ref);
+  } catch (e) {
+    if (!(e instanceof DomeprintError) || e.code !== "E_RANGE") throw e;
+    const value = "efficiency" in c ? c.efficiency : c.dischargeTemperature;
+    throw cycleInputError(input, value, "efficiency" in c ? String(value) : temperatureText(value),
+      `even an isentropic compression from ${temperatureText(suction.T)} to ${pressureText(pOut)} ends above the upper temperature limit ${temperatureText(f.Tmax)} of the equation for ${f.id}`,
+      "a lower condensing level, a higher evaporating level, a smaller suction drop or less superheat");
+  }
 }
 
 /** The discharge state at enthalpy h; a low efficiency can push it past the equation's upper temperature. */

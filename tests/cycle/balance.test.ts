@@ -17,7 +17,7 @@ const singles: [string, SingleStageSpec][] = [
   ["R404A −30/35 °C at dew points, IHX 0.6", { fluid: "R404A", evaporating: { T: C(-30) }, condensing: { T: C(35) }, superheat: 5, subcooling: 2, ihx: 0.6, compressor: { efficiency: 0.6 } }],
   ["propane by pressure, IHX 0.8, iir reference", { fluid: "propane", reference: "iir", evaporating: { p: 3 * bar }, condensing: { p: 15 * bar }, superheat: 3, ihx: 0.8, compressor: { efficiency: 0.75 } }],
   ["ammonia with a discharge temperature", { fluid: "ammonia", evaporating: { T: C(-10) }, condensing: { T: C(35) }, superheat: 4, subcooling: 1, compressor: { dischargeTemperature: C(125) } }],
-  ["R410A at bubble points, ip-agnostic", { fluid: "R410A", evaporating: { T: C(5) }, condensing: { T: C(50) }, glidePoint: "bubble", superheat: 8, subcooling: 4, compressor: { efficiency: 0.68 } }],
+  ["R410A at bubble points", { fluid: "R410A", evaporating: { T: C(5) }, condensing: { T: C(50) }, glidePoint: "bubble", superheat: 8, subcooling: 4, compressor: { efficiency: 0.68 } }],
 ];
 
 const twos: [string, TwoStageSpec][] = [
