@@ -64,8 +64,8 @@ export interface PlacementInput {
   halo: number;
 }
 
-/** Candidate spacing along a line, in mm: fine enough to find gaps, coarse enough to stay fast. */
-const STEP = 1.5;
+/** Candidate spacing along a line as a share of the type's cap height: fine enough to find gaps, coarse enough to stay fast. */
+const STEP_PER_CAP = 0.6;
 
 const WEIGHT = { prefer: 4, crowding: 0.6, alignment: 1.2, steep: 0.5 } as const;
 
@@ -140,7 +140,8 @@ export class LabelPlacer {
     const first = new Map<LabelRequest, Candidate>();
     const shapes = new Map(requests.map((r) => [r, shapeOf(r, this.input.halo)]));
     for (const request of requests) {
-      const list = labelCandidates(request.pieces, shapes.get(request)!, STEP, request.beside ?? 0);
+      const step = STEP_PER_CAP * shapes.get(request)!.capHeight;
+      const list = labelCandidates(request.pieces, shapes.get(request)!, step, request.beside ?? 0);
       candidates.set(request, list);
       const chosen = this.best(request, list);
       if (chosen) {
@@ -152,7 +153,8 @@ export class LabelPlacer {
     const unlabelled: { owner: string; text: string }[] = [];
     for (const request of requests) {
       if (first.has(request)) continue;
-      const chosen = this.best(request, labelCandidates(request.pieces, shapes.get(request)!, STEP / 2, request.beside ?? 0, 0.7));
+      const shape = shapes.get(request)!;
+      const chosen = this.best(request, labelCandidates(request.pieces, shape, (STEP_PER_CAP * shape.capHeight) / 2, request.beside ?? 0, 0.7));
       if (chosen) {
         this.commit(request, chosen.candidate);
         first.set(request, chosen.candidate);

@@ -7,20 +7,29 @@ import type { DrawnLine, Preference } from "./line-marks.js";
 import type { Rect } from "./geometry.js";
 import type { Family } from "./style.js";
 
-/** x of the dew (saturated-vapour) line at page height y, or undefined above the dome. */
-function dewLine(drawn: DrawnLine[]): (y: number) => number | undefined {
+/**
+ * x of the dew (saturated-vapour) line at page height y, or undefined above the dome: tabulated once
+ * every half millimetre of height, because the optimiser asks for it at every candidate.
+ */
+function dewLine(drawn: DrawnLine[], frame: Rect): (y: number) => number | undefined {
   const points = drawn.filter((d) => d.line.quantity === "saturation-vapour").flatMap((d) => d.pieces);
-  return (y) => {
-    let best: number | undefined;
-    for (const p of points) {
-      for (let i = 0; i + 3 < p.length; i += 2) {
-        const y1 = p[i + 1]!, y2 = p[i + 3]!;
-        if ((y1 - y) * (y2 - y) > 0 || y1 === y2) continue;
-        const x = p[i]! + ((y - y1) / (y2 - y1)) * (p[i + 2]! - p[i]!);
-        if (best === undefined || x > best) best = x;
+  const STEP = 0.5;
+  const rows = Math.ceil(frame.height / STEP) + 1;
+  const table = new Float64Array(rows).fill(Number.NaN);
+  for (const p of points) {
+    for (let i = 0; i + 3 < p.length; i += 2) {
+      const y1 = p[i + 1]!, y2 = p[i + 3]!;
+      const lo = Math.max(0, Math.ceil((Math.min(y1, y2) - frame.y) / STEP)), hi = Math.min(rows - 1, Math.floor((Math.max(y1, y2) - frame.y) / STEP));
+      for (let r = lo; r <= hi; r++) {
+        const y = frame.y + r * STEP;
+        const x = y1 === y2 ? Math.max(p[i]!, p[i + 2]!) : p[i]! + ((y - y1) / (y2 - y1)) * (p[i + 2]! - p[i]!);
+        if (Number.isNaN(table[r]!) || x > table[r]!) table[r] = x;
       }
     }
-    return best;
+  }
+  return (y) => {
+    const v = table[Math.round((y - frame.y) / STEP)];
+    return v === undefined || Number.isNaN(v) ? undefined : v;
   };
 }
 
@@ -29,7 +38,7 @@ function bowl(du: number, dv: number, su: number, sv: number): number {
 }
 
 export function labelPreference(drawn: DrawnLine[], frame: Rect): Preference {
-  const dew = dewLine(drawn);
+  const dew = dewLine(drawn, frame);
   const u = (x: number) => (x - frame.x) / frame.width;
   const v = (y: number) => (y - frame.y) / frame.height;
   return (family: Family, line: Line) => {

@@ -23,21 +23,26 @@ export function textWidth(text: string, sizePt: number, weight: FontWeight = "no
 /** Greedy line filling; a word longer than the width is broken between characters rather than overflow. */
 export function wrap(text: string, sizePt: number, width: number, weight: FontWeight = "normal"): string[] {
   const lines: string[] = [];
+  const space = textWidth(" ", sizePt, weight);
   for (const paragraph of text.split(/\n/)) {
     let line = "";
+    let used = 0;
     for (const word of paragraph.split(/\s+/).filter(Boolean)) {
-      const candidate = line === "" ? word : `${line} ${word}`;
-      if (textWidth(candidate, sizePt, weight) <= width) {
-        line = candidate;
+      const w = textWidth(word, sizePt, weight);
+      if (line === "" ? w <= width : used + space + w <= width) {
+        used = line === "" ? w : used + space + w;
+        line = line === "" ? word : `${line} ${word}`;
         continue;
       }
       if (line !== "") lines.push(line);
       line = word;
-      while (textWidth(line, sizePt, weight) > width && line.length > 1) {
+      used = w;
+      while (used > width && line.length > 1) {
         let cut = line.length - 1;
         while (cut > 1 && textWidth(line.slice(0, cut), sizePt, weight) > width) cut--;
         lines.push(line.slice(0, cut));
         line = line.slice(cut);
+        used = textWidth(line, sizePt, weight);
       }
     }
     lines.push(line);

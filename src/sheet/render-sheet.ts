@@ -13,7 +13,6 @@ import { layoutSheet, panelMinWidth, type SheetReport } from "../layout/sheet-la
 import type { Style } from "../layout/style.js";
 import { loadStyle } from "../layout/style-file.js";
 import { renderPdf } from "../render/pdf.js";
-import { renderPng } from "../render/png.js";
 import { renderSvg } from "../render/svg.js";
 import { atmosphereAt } from "../units/index.js";
 import { engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
@@ -113,7 +112,8 @@ export async function renderSheet(options: SheetOptions): Promise<RenderedSheet>
   const wants = (f: Format) => o.formats.includes(f);
   if (wants("svg")) out.svg = Buffer.from(renderSvg(scene), "utf8");
   if (wants("pdf")) out.pdf = await renderPdf(scene, { cmyk: o.cmyk });
-  if (wants("png")) out.png = renderPng(scene, { dpi: o.dpi });
+  // resvg is a native module; it is loaded only when a PNG is asked for, to keep the command quick to start.
+  if (wants("png")) out.png = (await import("../render/png.js")).renderPng(scene, { dpi: o.dpi });
   if (wants("json")) {
     const json = { format: "domeprint-sheet-data/1", sheet: scene.meta.attributes, fluid: content.fluid, report: sheet.report, saturationTable: content.saturationTable ?? null, lines: lineSetToJson(content.lines) };
     out.json = Buffer.from(`${JSON.stringify(json)}\n`, "utf8");
