@@ -70,7 +70,8 @@ function vapourFraction(f: Fluid, st: State, ref: ReferenceName): number {
   return (st.h - hL) / (hV - hL);
 }
 
-interface Built { steps: ChainStep[]; branch: ChainStep[]; branchJoin: Role; highFlow: number; low: Compression; high: Compression; notes: string[]; approach?: number }
+/** An arrangement's states in flow order, its side stream (leaving the main circuit at branchFrom, rejoining at branchJoin), and its flows. */
+interface Built { steps: ChainStep[]; branch: ChainStep[]; branchFrom: Role; branchJoin: Role; highFlow: number; low: Compression; high: Compression; notes: string[]; approach?: number }
 
 /** Flash tank: the condenser liquid flashes at the intermediate pressure; its vapour joins the low-stage discharge. */
 function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
@@ -97,7 +98,7 @@ function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, 
   ];
   const branch: ChainStep[] = flashes ? [{ state: tankVapour, role: "flash-tank-vapour", flow: highFlow - 1, process: "isobaric" }] : [];
   const notes = ["flash tank: the condenser liquid flashes at the intermediate pressure; saturated vapour from the tank mixes with the low-stage discharge, saturated liquid feeds the evaporator"];
-  return { steps, branch, branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
+  return { steps, branch, branchFrom: "flash-tank-inlet", branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
 }
 
 /**
@@ -125,7 +126,7 @@ function openIntercooler(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Le
     { state: throttle(f, tankLiquid, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
   ];
   const notes = ["open flash intercooler: the condenser liquid flashes at the intermediate pressure and the low-stage discharge is desuperheated in the tank's liquid; saturated vapour goes to the high stage, saturated liquid to the evaporator"];
-  return { steps, branch: [], branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
+  return { steps, branch: [], branchFrom: "flash-tank-inlet", branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes };
 }
 
 /** Economiser: part of the condenser liquid, throttled to the intermediate pressure, subcools the rest and is injected into the high stage. */
@@ -140,6 +141,7 @@ function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels,
   }
   const liquidOut = flashTP(f, Tout, L.condensing.p, ref);
   const injOut = flashPX(f, pi, 1, ref);
+  if (!(injOut.h > injIn.h)) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the condenser liquid would reach the economiser as vapour", "an intermediate level where the injected liquid can still evaporate");
   const injFlow = (c.condOut.h - liquidOut.h) / (injOut.h - injIn.h);
   const highFlow = 1 + injFlow;
   const highSuction = mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: injOut, flow: injFlow }], ref);
@@ -159,7 +161,7 @@ function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels,
     { state: injOut, role: "economiser-injection-outlet", flow: injFlow, process: "isobaric" },
   ];
   const notes = ["economiser: part of the condenser liquid is throttled to the intermediate pressure, subcools the main liquid and leaves as saturated vapour that mixes with the low-stage discharge"];
-  return { steps, branch, branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes, approach };
+  return { steps, branch, branchFrom: "condenser-outlet", branchJoin: "high-stage-suction", highFlow, low: c.low, high, notes, approach };
 }
 
 function lowSteps(c: Common): ChainStep[] {
@@ -197,7 +199,7 @@ export function twoStageCycle(spec: TwoStageSpec): CycleResult {
   const result: CycleResult = {
     model: `two-stage-${spec.arrangement}`,
     fluid: f.id, blend: f.pseudoPure, reference: ref, levels: L, superheat, subcooling, drops,
-    notes: [...commonNotes(f), "both stages from their isentropic efficiencies or discharge temperatures", ...b.notes],
+    notes: [...commonNotes(f), ...stageNotes(spec), ...b.notes],
     points, auxiliary: stages.map((s) => s.isentropic), stages, performance, path,
     branches: side.points.length ? [branchPath(f, ref, b, main.points, side.points, side.legs)] : [],
   };
@@ -205,9 +207,14 @@ export function twoStageCycle(spec: TwoStageSpec): CycleResult {
   return result;
 }
 
+function stageNotes(spec: TwoStageSpec): string[] {
+  const how = (c: Compressor) => ("efficiency" in c ? "discharge from the given isentropic efficiency" : "isentropic efficiency derived from the given discharge temperature");
+  return [`low stage: ${how(spec.lowStage)}; high stage: ${how(spec.highStage)}`];
+}
+
 /** The side stream's path: from where it leaves the main circuit, through its own points, to where it rejoins. */
 function branchPath(f: Fluid, ref: ReferenceName, b: Built, main: CyclePoint[], side: CyclePoint[], legs: Leg[]) {
-  const start = b.branch[0]!.role === "economiser-injection-inlet" ? main.find((p) => p.roles.includes("condenser-outlet"))! : main.find((p) => p.roles.includes("flash-tank-inlet"))!;
+  const start = main.find((p) => p.roles.includes(b.branchFrom))!;
   const join = main.find((p) => p.roles.includes(b.branchJoin))!;
   return tracePath(f, start.state, [{ to: side[0]!.state, process: b.branch[0]!.process }, ...legs, { to: join.state, process: "isobaric" }], ref);
 }
