@@ -27,7 +27,7 @@ export function makeContext(f: Fluid, reference: ReferenceName, mapping: PageMap
     off: referenceOffset(f, reference),
     mapping,
     trace: { mapping, toleranceMm },
-    stats: { evaluations: 0, capped: 0, breaks: 0, bridges: 0 },
+    stats: { evaluations: 0, capped: 0, breaks: 0, bridges: 0, longestBridgeMm: 0 },
     pTop: Math.min(mapping.window.pMax, f.pmax),
     tTop: Math.min(tTop, f.Tmax),
     scratch: new Float64Array(PROP_SLOTS),

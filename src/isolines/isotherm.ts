@@ -4,7 +4,7 @@ import { densityTP, saturationT, type Branch, type Saturation } from "../eos/ind
 import { attempt, pointTRho, type Context } from "./context.js";
 import { isTieLine, mixTie, type TieLines } from "./tie-lines.js";
 import { pageDistance } from "./page.js";
-import { joinParts, traceCurve } from "./trace.js";
+import { bridge, joinParts, traceCurve } from "./trace.js";
 import type { Point } from "./types.js";
 
 /**
@@ -65,23 +65,23 @@ function blendIsotherm(ctx: Context, tie: TieLines, T: number, sat: Saturation):
     if (bottom) vapour.push(...walkDensity(ctx, T, sat.rhoV, bottom));
   }
   if (glideFrom < Math.log(sat.pL) && floor) {
-    const liquidEnd = pointTRho(ctx, T, floor);
-    const next = wet.length ? glidePoint(tie, T, glideFrom) : pointTRho(ctx, T, sat.rhoV);
-    bridge(ctx, liquid, wet.length ? wet : vapour, liquidEnd, next);
+    const after = wet.length ? wet : vapour;
+    const end = pointTRho(ctx, T, floor), start = wet.length ? glidePoint(tie, T, glideFrom) : pointTRho(ctx, T, sat.rhoV);
+    if (bridgeable(ctx, liquid, after, end, start)) bridge(ctx.mapping, liquid, after, Infinity, ctx.stats);
   }
   return joinParts(ctx.mapping, [liquid, wet, vapour]);
 }
 
-/** Joins the liquid walk to what follows it with a straight chord, when both reach the gap's edges on the page. */
-function bridge(ctx: Context, before: Point[][], after: Point[][], end: Point | null, start: Point | null): void {
+/**
+ * Whether a chord may stand in for the glide the engine cannot give: both walks must reach the gap's edges in the
+ * window, and the gap may span no more than the tolerance in height, so any glide between lies within it.
+ */
+function bridgeable(ctx: Context, before: Point[][], after: Point[][], end: Point | null, start: Point | null): boolean {
   const last = before[before.length - 1], first = after[0];
-  if (!last || !first || !end || !start) return;
+  if (!last || !first || !end || !start) return false;
   const m = ctx.mapping;
   const near = (a: Point, b: Point) => pageDistance(m, a, b) < 1e-3;
-  if (!near(last[last.length - 1]!, end) || !near(first[0]!, start)) return;
-  if (Math.abs(m.y(end[1]) - m.y(start[1])) > ctx.trace.toleranceMm) return;
-  last.push(first[0]!);
-  ctx.stats.bridges++;
+  return near(last[last.length - 1]!, end) && near(first[0]!, start) && Math.abs(m.y(end[1]) - m.y(start[1])) <= ctx.trace.toleranceMm;
 }
 
 function saturationAt(ctx: Context, T: number): Saturation | null {

@@ -120,8 +120,8 @@ export function traceCurve(evaluate: Evaluate, t0: number, t1: number, settings:
 }
 
 /**
- * Joins the pieces of consecutive parts of one line (liquid, two-phase, vapour …) where one ends on the
- * page within a thousandth of a millimetre of where the next begins.
+ * Joins the pieces of consecutive parts of one line (liquid, two-phase, vapour …) where one ends on the page
+ * within a thousandth of a millimetre of where the next begins.
  */
 export function joinParts(mapping: PageMapping, parts: Point[][][]): Point[][] {
   const out: Point[][] = [];
@@ -133,4 +133,22 @@ export function joinParts(mapping: PageMapping, parts: Point[][][]): Point[][] {
     }
   }
   return out;
+}
+
+/**
+ * Connects the end of `before` to the start of `after` (counted in stats.bridges) when the two lie apart on the
+ * page but within maxMm: across a gap the engine leaves close to the critical point. A gap no wider than mergeMm
+ * is closed by letting the end stand in for the start, rather than by a chord of its own with a slope of chance.
+ */
+export function bridge(mapping: PageMapping, before: Point[][], after: Point[][], maxMm: number, stats: TraceStats, mergeMm = 0): boolean {
+  const last = before[before.length - 1], first = after[0];
+  if (!last || !first) return false;
+  const end = last[last.length - 1]!;
+  const gap = pageDistance(mapping, end, first[0]!);
+  if (gap < EDGE_MM || gap > maxMm) return false;
+  if (gap <= mergeMm && first.length > 2) first[0] = end;
+  else first.unshift(end);
+  stats.bridges++;
+  stats.longestBridgeMm = Math.max(stats.longestBridgeMm, gap);
+  return true;
 }

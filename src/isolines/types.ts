@@ -56,10 +56,13 @@ export interface TraceStats {
   /** Places where a line broke because the equation jumped or could not be evaluated. */
   breaks: number;
   /**
-   * Straight chords drawn where a blend's isotherm crosses the band just below the critical pressure in which
-   * the engine has no two-phase states (its bubble ancillary and liquid root part ways there).
+   * Straight chords drawn across gaps the engine leaves close to a blend's critical point: where its isotherm
+   * crosses the band below p_c without two-phase states, or its two-phase and one-phase states meet a little
+   * apart.
    */
   bridges: number;
+  /** The longest of those chords on the page [mm]. */
+  longestBridgeMm: number;
 }
 
 export interface LineSet {
