@@ -18,6 +18,8 @@ export interface PlanOptions {
   panelMinWidth?: number;
   /** Sheet margin in mm, replacing the style's margin scaled to the paper. */
   margin?: number;
+  /** The panels include a saturation table: a portrait band is made taller to hold it. */
+  table?: boolean;
 }
 
 export interface AxisMetrics {
@@ -89,7 +91,8 @@ export function planPage(options: PlanOptions): PagePlan {
     panels = { x: inner.x + inner.width - width, y: inner.y, width, height: inner.height };
     plotOuter = { x: inner.x, y: inner.y, width: inner.width - width - gap, height: inner.height };
   } else {
-    const height = inner.height * 0.3;
+    // Three columns of panels under the plot; a table needs about a fifth more height than the text panels.
+    const height = inner.height * (options.table ? 0.37 : 0.3);
     panels = { x: inner.x, y: inner.y + inner.height - height, width: inner.width, height };
     plotOuter = { x: inner.x, y: inner.y, width: inner.width, height: inner.height - height - gap };
   }

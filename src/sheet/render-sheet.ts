@@ -80,7 +80,7 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
     style,
     gauge: o.gauge,
     glide,
-    ...(table ? { panelMinWidth: panelMinWidth(style, paper, glide) } : {}),
+    ...(table ? { panelMinWidth: panelMinWidth(style, paper, glide), table } : {}),
     ...(o.margin !== undefined ? { margin: o.margin } : {}),
   });
   const data = engineData(fluid, o.reference, units, plan.plot);
