@@ -43,7 +43,8 @@ const AROUND: [number, number][] = [
 function pointLabel(x: number, y: number, label: string, style: OverlayStyle, frame: Rect, obstacles: SpatialGrid): { x: number; y: number; box: Box } | undefined {
   const m = runMetrics(label, style.labelPt, "bold");
   const hw = m.width / 2 + style.halo, hh = m.capHeight / 2 + style.halo;
-  const reach = style.marker * 1.6;
+  // Clear of the marker's own keep-out box (radius + 0.3 mm) and the 0.3 mm margin every label keeps.
+  const reach = style.marker + 0.8;
   for (const [dx, dy] of AROUND) {
     const cx = x + dx * (reach + hw), cy = y + dy * (reach + hh);
     const b = box(cx, cy, hw, hh);

@@ -20,6 +20,8 @@ export interface PlanOptions {
   margin?: number;
   /** The panels include a saturation table: a portrait band is made taller to hold it. */
   table?: boolean;
+  /** Height of the band under the plot that holds overlay tables (readings, cycle states), in mm; 0 for none. */
+  overlayBand?: number;
 }
 
 export interface AxisMetrics {
@@ -46,6 +48,8 @@ export interface PagePlan {
   /** Panels stand in a column right of the plot (landscape) or in a band below it (portrait). */
   arrangement: "column" | "band";
   axis: AxisMetrics;
+  /** Band under the plot, as wide as the plot area, for overlay tables (height 0 when there are none). */
+  overlayBand: Rect;
   /** x of each vertical scale's rule, for the axes to draw on. */
   rules: { pressure: number; gauge?: number; saturation: number; dew?: number };
 }
@@ -96,12 +100,15 @@ export function planPage(options: PlanOptions): PagePlan {
     panels = { x: inner.x, y: inner.y + inner.height - height, width: inner.width, height };
     plotOuter = { x: inner.x, y: inner.y, width: inner.width, height: inner.height - height - gap };
   }
-  const plot = { x: plotOuter.x + left, y: plotOuter.y + top, width: plotOuter.width - left - right, height: plotOuter.height - top - bottom };
+  // Overlay tables are wide (ten columns of readings), so they take a band under the plot, not the panel column.
+  const band = options.overlayBand ? options.overlayBand + gap : 0;
+  const overlayBand = { x: plotOuter.x, y: plotOuter.y + plotOuter.height - (options.overlayBand ?? 0), width: plotOuter.width, height: options.overlayBand ?? 0 };
+  const plot = { x: plotOuter.x + left, y: plotOuter.y + top, width: plotOuter.width - left - right, height: plotOuter.height - top - bottom - band };
   const rules = {
     pressure: plot.x,
     ...(options.gauge ? { gauge: plot.x - scale - gap } : {}),
     saturation: plot.x + plot.width,
     ...(options.glide ? { dew: plot.x + plot.width + scale + axis.gap } : {}),
   };
-  return { width: page.width, height: page.height, sizes, margin, gap, plot, panels, arrangement: landscape ? "column" : "band", axis, rules };
+  return { width: page.width, height: page.height, sizes, margin, gap, plot, panels, overlayBand, arrangement: landscape ? "column" : "band", axis, rules };
 }

@@ -15,15 +15,16 @@ import { thinLines } from "./line-thinning.js";
 import { rect, text } from "./marks.js";
 import { sceneMeta } from "./sheet-meta.js";
 import { overlayMarks } from "./overlay-marks.js";
-import { drawPanel } from "./panel.js";
-import { arrangePanels } from "./panel-arrangement.js";
+import { drawPanel, panelHeight, type Panel, type PanelStyle } from "./panel.js";
+import type { Overlay } from "../cycle/overlay.js";
+import { arrangePanels, type PlacedPanel } from "./panel-arrangement.js";
 import type { PagePlan } from "./plan.js";
 import { chartScales } from "./scales.js";
 import type { Layer, Mark, Scene, Stroke } from "./scene.js";
 import { cautionPanel, keyEntries, keyPanel, overlayPanels, saturationTablePanel, sourcePanel, titlePanel } from "./sheet-panels.js";
 import { SpatialGrid } from "./spatial-grid.js";
 import { FAMILIES, type Family, type Style } from "./style.js";
-import { MIN_TYPE_PT, sizesFor } from "./sizes.js";
+import { MIN_TYPE_PT, sizesFor, type Sizes } from "./sizes.js";
 import { textWidth } from "./text.js";
 
 export interface SheetReport {
@@ -54,19 +55,19 @@ function familyStrokes(style: Style, plan: PagePlan): Record<Family, Stroke> {
   return Object.fromEntries(FAMILIES.map((f) => [f, plan.sizes.stroke(style.lines[f])])) as Record<Family, Stroke>;
 }
 
-function panelStyle(style: Style, plan: PagePlan) {
+function panelStyle(style: Style, sizes: Sizes): PanelStyle {
   return {
-    pt: plan.sizes.pt(style.type.panel),
-    titlePt: plan.sizes.pt(style.type.panelTitle),
+    pt: sizes.pt(style.type.panel),
+    titlePt: sizes.pt(style.type.panelTitle),
     ink: style.page.ink,
     muted: style.page.muted,
     fill: style.panels.fill,
-    stroke: plan.sizes.stroke(style.panels.stroke),
+    stroke: sizes.stroke(style.panels.stroke),
     titleFill: style.panels.titleFill,
     titleInk: style.panels.titleInk,
     accent: style.panels.accent,
     stripe: style.panels.stripe,
-    padding: plan.sizes.mm(style.panels.padding),
+    padding: sizes.mm(style.panels.padding),
   };
 }
 
@@ -82,10 +83,10 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
 
   // Panels first: their rectangles are obstacles for everything placed later.
   const families = new Set(drawn.map((d) => d.family));
-  const pStyle = panelStyle(style, plan);
+  const pStyle = panelStyle(style, plan.sizes);
   const arrangement = arrangePanels(
     {
-      fixed: [titlePanel(content), keyPanel(keyEntries(families, units, strokes, fluid.glide)), cautionPanel(fluid), ...overlayPanels(content.overlays), sourcePanel(content)],
+      fixed: [titlePanel(content), keyPanel(keyEntries(families, units, strokes, fluid.glide)), cautionPanel(fluid), sourcePanel(content)],
       ...(content.saturationTable ? { table: (thinning: number) => saturationTablePanel(tableRows(content, thinning), units, content.gauge?.atmosphere ?? 101325, fluid.glide) } : {}),
     },
     plan.panels,
@@ -94,8 +95,9 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
     plan.arrangement,
   );
 
+  const overlayTables = placeOverlayPanels(overlayPanels(content.overlays), plan, arrangement.style);
   const obstacles = new SpatialGrid(10);
-  for (const p of arrangement.placed) obstacles.addBox(p.panel.id, rectBox(p.rect));
+  for (const p of [...arrangement.placed, ...overlayTables]) obstacles.addBox(p.panel.id, rectBox(p.rect));
   const hardOwners = new Set<string>();
   for (const d of drawn) {
     if (d.family !== "dome") continue;
@@ -150,7 +152,7 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
     { id: "labels", label: "Line labels", marks: labelMarks },
     { id: "frame", label: "Plot frame", marks: [rect(frame.x, frame.y, frame.width, frame.height, undefined, frameStroke)] },
     { id: "axes", label: "Axes and scales", marks: axesMarks(ticks, scales, units, plan, axisInk, { glide: fluid.glide, ...(content.gauge ? { altitude: content.gauge.altitude } : {}) }) },
-    { id: "panels", label: "Panels", marks: arrangement.placed.flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height)) },
+    { id: "panels", label: "Panels", marks: [...arrangement.placed, ...overlayTables].flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height)) },
   ];
   const scene: Scene = {
     width: plan.width,
@@ -167,6 +169,25 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
     scene,
     report: { labels: placed.report, pointLabels: { placed: overlay.placed, dropped: overlay.dropped }, omitted: arrangement.omitted, panelPt: arrangement.style.pt },
   };
+}
+
+/** Overlay tables side by side in the band under the plot, each as wide as its share of the band. */
+function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): PlacedPanel[] {
+  if (panels.length === 0) return [];
+  const band = plan.overlayBand;
+  const width = (band.width - plan.gap * (panels.length - 1)) / panels.length;
+  return panels.map((panel, i) => ({ panel, rect: { x: band.x + i * (width + plan.gap), y: band.y, width, height: band.height } }));
+}
+
+/** Height the overlay tables need in the band under the plot, at the style's panel type on this paper. */
+export function overlayBandHeight(style: Style, page: { width: number; height: number }, overlays: Overlay[], margin?: number): number {
+  const panels = overlayPanels(overlays);
+  if (panels.length === 0) return 0;
+  const sizes = sizesFor(style, page);
+  const pStyle = panelStyle(style, sizes);
+  const inner = page.width - 2 * (margin ?? sizes.mm(style.page.margin));
+  const width = (inner - sizes.mm(style.page.gap) * (panels.length - 1)) / panels.length;
+  return Math.max(...panels.map((p) => panelHeight(p, pStyle, width)));
 }
 
 /** Width the panels need for a saturation table at the smallest type the arrangement may use. */

@@ -108,7 +108,7 @@ export function overlayPanels(overlays: Overlay[]): Panel[] {
   return overlays.flatMap((o, i) =>
     o.tables.map((t, j) => ({
       id: `overlay-${i}-${j}`,
-      title: `${o.name}: ${t.title}`,
+      title: t.title === o.name ? t.title : `${o.name}: ${t.title}`,
       items: [{ kind: "table" as const, columns: t.columns, units: t.columns.map(() => ""), rows: t.rows, align: t.columns.map((_, k) => (k === 0 ? "start" : "end") as "start" | "end") }],
     })),
   );

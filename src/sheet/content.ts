@@ -109,8 +109,7 @@ export interface EngineData {
 }
 
 /** The LineSet traced for the planned plot frame, so its 0.05 mm tolerance holds on this paper. */
-export function engineData(fluid: Fluid, reference: ReferenceName | undefined, units: DisplayUnits, frame: { width: number; height: number }): EngineData {
-  const ref = reference ?? defaultReference(fluid);
+export function engineData(fluid: Fluid, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }): EngineData {
   const lines = buildLineSet(fluid.id, {
     units: units.system,
     reference: ref,

@@ -9,13 +9,13 @@ import { displayUnits } from "../layout/display-units.js";
 import { resolvePaper } from "../layout/paper.js";
 import { planPage } from "../layout/plan.js";
 import type { Scene } from "../layout/scene.js";
-import { layoutSheet, panelMinWidth, type SheetReport } from "../layout/sheet-layout.js";
+import { layoutSheet, overlayBandHeight, panelMinWidth, type SheetReport } from "../layout/sheet-layout.js";
 import type { Style } from "../layout/style.js";
 import { loadStyle } from "../layout/style-file.js";
 import { renderPdf } from "../render/pdf.js";
 import { renderSvg } from "../render/svg.js";
 import { atmosphereAt } from "../units/index.js";
-import { engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
+import { defaultReference, engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
 import { getFluid } from "../eos/index.js";
 import { readingsFileOverlay } from "./overlays.js";
 import { checkSheetOptions, type CheckedSheetOptions, type Format, type SheetOptions } from "./options.js";
@@ -75,6 +75,8 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
   const table = o.saturationTable ?? style.defaults.saturationTable;
   const fluid = getFluid(o.fluid);
   const glide = hasGlide(fluid);
+  const reference = o.reference ?? defaultReference(fluid);
+  const overlays = [...o.overlays, ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, reference, o.units, o.altitude))];
   const plan = planPage({
     page: paper,
     style,
@@ -82,11 +84,11 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
     glide,
     ...(table ? { panelMinWidth: panelMinWidth(style, paper, glide), table } : {}),
     ...(o.margin !== undefined ? { margin: o.margin } : {}),
+    overlayBand: overlayBandHeight(style, paper, overlays, o.margin),
   });
-  const data = engineData(fluid, o.reference, units, plan.plot);
+  const data = engineData(fluid, reference, units, plan.plot);
   const identity = fluidIdentity(data.fluid, data.reference);
   const atmosphere = atmosphereAt(o.altitude);
-  const overlays = [...o.overlays, ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, data.reference, o.units, o.altitude))];
   // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
   const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, overlays }, paper, reference: data.reference });
   const content: SheetContent = {
