@@ -128,7 +128,8 @@ export function makeTieLines(ctx: Context): TieLines {
     const at = (sigma: number): TieLine | null => {
       let t = cache.get(sigma);
       if (t === undefined) {
-        const sat = blendSaturation(f, Math.exp(sigma));
+        // exp(ln p) can round below the lowest bubble pressure, which the engine would then call solid.
+        const sat = blendSaturation(f, Math.max(Math.exp(sigma), floor));
         t = sat ? fromSaturation(ctx, sigma, sat) : null;
         cache.set(sigma, t);
       }

@@ -20,6 +20,11 @@ export interface TraceSettings {
 const IN = 0, OUT = 1, UNDEFINED = 2;
 /** A chord still this long after the depth cap is a jump of the equation, not a curve: the line breaks there. */
 const JUMP_MM = 0.5;
+/**
+ * Halving the parameter of a smooth curve halves its chords (for a square-root end, to 0.71 of the chord); across
+ * a jump one half keeps nearly the whole chord, however fine the split. Such chords are refined down to the cap.
+ */
+const JUMP_SHARE = 0.9;
 /** Window edges and validity ends are located to this distance on the page. */
 const EDGE_MM = 1e-3;
 /** Levels of midpoints probed between two samples that both lie outside, to catch a short visit to the window. */
@@ -71,9 +76,11 @@ export function traceCurve(evaluate: Evaluate, t0: number, t1: number, settings:
       span(tm, m, tb, b, depth + 1);
       return;
     }
-    if (chordDeviation(mapping, a, b, m!) <= toleranceMm) { push(b); return; }
+    const length = pageDistance(mapping, a, b);
+    const lopsided = length > JUMP_MM && Math.max(pageDistance(mapping, a, m!), pageDistance(mapping, m!, b)) > JUMP_SHARE * length;
+    if (!lopsided && chordDeviation(mapping, a, b, m!) <= toleranceMm) { push(b); return; }
     if (depth >= maxDepth || used >= budget) {
-      if (pageDistance(mapping, a, b) > JUMP_MM) { stats.breaks++; start(b); }
+      if (length > JUMP_MM) { stats.breaks++; start(b); }
       else { stats.capped++; push(m!); push(b); }
       return;
     }

@@ -32,6 +32,9 @@ export interface Densities {
 }
 
 const T_STEPS = [10, 20, 50, 100, 200];
+/** Finer steps for charts whose temperature span is a few kelvin or tens of kelvin (cryogens). */
+const FINE_T_STEPS = [5, 2, 1, 0.5, 0.2, 0.1];
+const MIN_ISOTHERMS = 8;
 const S_STEPS: Record<UnitSystem, number[]> = { si: [0.05, 0.1, 0.2, 0.5, 1, 2], ip: [0.01, 0.02, 0.05, 0.1, 0.2, 0.5] };
 const MAX_ISOTHERMS = 36, MAX_ISENTROPES = 26, MAX_ISENTHALPS = 30;
 export const DEFAULT_MINOR_SPACING_MM = 5;
@@ -90,9 +93,16 @@ function hasRoom(f: Fluid, mapping: PageMapping, reference: ReferenceName, T0: n
   return gaps.length > 0 && Math.min(...gaps) >= spacing;
 }
 
+/** 10 or 20 (K or °F) for refrigeration spans, coarser for wide ones, finer where 10 would leave under 8 lines. */
+function isothermStep(span: number): number {
+  const step = stepFor(span, T_STEPS, MAX_ISOTHERMS);
+  if (span / step >= MIN_ISOTHERMS) return step;
+  return FINE_T_STEPS.find((s) => span / s >= MIN_ISOTHERMS) ?? FINE_T_STEPS[FINE_T_STEPS.length - 1]!;
+}
+
 export function isothermValues(f: Fluid, units: UnitSystem, r: WindowRanges, mapping: PageMapping, reference: ReferenceName, d: Densities): FamilyValue[] {
   const lo = toDisplay(units, "temperature", r.Tlo), hi = toDisplay(units, "temperature", r.Thi);
-  const step = d.isotherm ?? stepFor(hi - lo, T_STEPS, MAX_ISOTHERMS);
+  const step = d.isotherm ?? isothermStep(hi - lo);
   const inRange = (v: FamilyValue) => v.si >= f.Tmin && v.si <= f.Tmax;
   const majors = family(units, "temperature", multiplesBetween(lo, hi, step)).filter(inRange);
   const spacing = d.minorIsothermSpacingMm ?? DEFAULT_MINOR_SPACING_MM;
