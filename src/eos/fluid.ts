@@ -35,7 +35,8 @@ export class Fluid {
   readonly rhocEquation: number;
   /** A saturation state 2 K below the equation's critical point, the anchor of near-critical starting values. */
   nearCriticalAnchor: { T: number; rhoL: number; rhoV: number } | undefined;
-  /** Saturation pressure at satTmax [Pa], computed at first use. */
+  /** Saturation pressures at Tmin and satTmax [Pa], computed at first use. */
+  satPmin: number | undefined;
   satPmax: number | undefined;
   /** Scratch vectors for solvers (never returned to callers). */
   readonly tmp = new Float64Array(PROP_SLOTS);

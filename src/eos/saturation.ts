@@ -115,8 +115,11 @@ export function saturationT(f: Fluid, T: number): Saturation {
 /** Pressure at the lowest saturation temperature and at the highest the solver reaches. */
 export function saturationPressureRange(f: Fluid): [number, number] {
   if (f.pseudoPure) return [f.pBubble!.value(f.Tmin), f.pc];
+  // The equation's own saturation pressure at the triple temperature, which may differ a little from the
+  // stated triple-point pressure (ammonia: 0.6 %); saturationP must accept what saturationT returns.
+  f.satPmin ??= pureSaturationT(f, f.Tmin).pL;
   f.satPmax ??= pureSaturationT(f, f.satTmax).pL;
-  return [f.data.triple.pVapour, f.satPmax];
+  return [f.satPmin, f.satPmax];
 }
 
 /**
