@@ -65,7 +65,7 @@ export interface PlacementInput {
 }
 
 /** Candidate spacing along a line as a share of the type's cap height: fine enough to find gaps, coarse enough to stay fast. */
-const STEP_PER_CAP = 0.6;
+const STEP_PER_CAP = 1;
 
 const WEIGHT = { prefer: 4, crowding: 0.6, alignment: 1.2, steep: 0.5 } as const;
 

@@ -55,7 +55,8 @@ function bandColumns(panels: Panel[], table: Panel | undefined, width: number, g
   const heights = new Map(others.map((p) => [p, panelHeight(p, style, free)]));
   let best: Panel[][] = [others, []];
   let bestHeight = Infinity;
-  for (const deal of deals(others, 2)) {
+  // The title block opens the first column, where a reader starts.
+  for (const deal of deals(others, 2).filter((d) => others.length === 0 || d[0]!.includes(others[0]!))) {
     const tallest = Math.max(...deal.map((col) => col.reduce((sum, p) => sum + heights.get(p)! + gap, 0)));
     if (tallest < bestHeight) {
       bestHeight = tallest;

@@ -84,9 +84,10 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
   // Panels first: their rectangles are obstacles for everything placed later.
   const families = new Set(drawn.map((d) => d.family));
   const pStyle = panelStyle(style, plan.sizes);
+  const typeScale = { heading: style.type.heading / style.type.panel, subheading: style.type.subheading / style.type.panel, small: style.type.smallPrint / style.type.panel };
   const arrangement = arrangePanels(
     {
-      fixed: [titlePanel(content), keyPanel(keyEntries(families, units, strokes, fluid.glide)), cautionPanel(fluid), sourcePanel(content)],
+      fixed: [titlePanel(content, typeScale), keyPanel(keyEntries(families, units, strokes, fluid.glide)), cautionPanel(fluid), sourcePanel(content, typeScale)],
       ...(content.saturationTable ? { table: (thinning: number) => saturationTablePanel(tableRows(content, thinning), units, content.gauge?.atmosphere ?? 101325, fluid.glide) } : {}),
     },
     plan.panels,

@@ -10,13 +10,20 @@ import type { Stroke } from "./scene.js";
 import type { Family } from "./style.js";
 import { formatFixed, formatNumber } from "./text.js";
 
-export function titlePanel(content: SheetContent): Panel {
+/** Sizes of the title block's heading, subheading and small print relative to the panels' body type. */
+export interface TypeScale {
+  heading: number;
+  subheading: number;
+  small: number;
+}
+
+export function titlePanel(content: SheetContent, type: TypeScale): Panel {
   const { fluid, fields, stamp } = content;
   const items: PanelItem[] = [];
-  if (fields.title) items.push({ kind: "heading", text: fields.title, scale: 1.5 });
-  items.push({ kind: "heading", text: fluid.designation, scale: 2.6 });
-  items.push({ kind: "paragraph", text: `${fluid.chemicalName}, ${fluid.formula}`, scale: 1.2 });
-  items.push({ kind: "paragraph", text: fluid.safetyClass ? `ISO 817 safety class ${fluid.safetyClass}` : "no ISO 817 safety class recorded", scale: 1.2 });
+  if (fields.title) items.push({ kind: "heading", text: fields.title, scale: type.subheading * 1.15 });
+  items.push({ kind: "heading", text: fluid.designation, scale: type.heading });
+  items.push({ kind: "paragraph", text: `${fluid.chemicalName}, ${fluid.formula}`, scale: type.subheading });
+  items.push({ kind: "paragraph", text: fluid.safetyClass ? `ISO 817 safety class ${fluid.safetyClass}` : "no ISO 817 safety class recorded", scale: type.subheading });
   items.push({ kind: "space" });
   const field = (label: string, value: string | undefined) => {
     if (value !== undefined && value.trim() !== "") items.push({ kind: "field", label, value });
@@ -40,7 +47,7 @@ function kelvinRange(fluid: FluidIdentity, units: DisplayUnits): string {
   return `Valid from ${t(fluid.validity.Tmin)} to ${t(fluid.validity.Tmax)}, up to ${p}. Critical point ${t(fluid.critical.T)}, ${formatNumber(toDisplay(fluid.critical.p, units.pressure), 5)} ${units.pressure.symbol}.`;
 }
 
-export function sourcePanel(content: SheetContent): Panel {
+export function sourcePanel(content: SheetContent, type: TypeScale): Panel {
   const { fluid, units, stamp } = content;
   const items: PanelItem[] = [
     { kind: "paragraph", text: `Equation of state: ${fluid.citation}.` },
@@ -52,7 +59,7 @@ export function sourcePanel(content: SheetContent): Panel {
       text: `Units: p absolute in ${units.pressure.symbol}, h in ${units.enthalpy.symbol}, t in ${units.temperature.symbol}, s in ${units.entropy.symbol}, v in ${units.volume.symbol}, ρ in ${units.density.symbol}.`,
     },
     { kind: "space" },
-    { kind: "paragraph", text: `Set by domeprint ${stamp.version} on ${stamp.date}; inputs ${stamp.hash}.`, muted: true },
+    { kind: "paragraph", text: `Set by domeprint ${stamp.version} on ${stamp.date}; inputs ${stamp.hash}.`, muted: true, scale: type.small },
   ];
   return { id: "source", title: "Source and validity", items };
 }
