@@ -41,7 +41,7 @@ export function chordDeviation(m: PageMapping, a: Point, b: Point, q: Point): nu
   return Math.hypot(qx - t * dx, qy - t * dy);
 }
 
-/** Whether a point lies in the window (edges included, with rounding slack). */
+/** Whether a point lies in the window (edges included, with a slack of rounding size). */
 export function inWindow(w: ChartWindow, q: Point): boolean {
   const eh = 1e-12 * (w.hMax - w.hMin);
   return q[0] >= w.hMin - eh && q[0] <= w.hMax + eh && q[1] >= w.pMin * (1 - 1e-12) && q[1] <= w.pMax * (1 + 1e-12);

@@ -1,6 +1,6 @@
 // Tie lines of the two-phase region as a function of one smooth parameter σ, cached for the whole build:
 // pure fluids σ = −(T_c,eq − T)^(1/3) (saturationT), pseudo-pure blends σ = ln p (saturationP).
-import { equationCriticalPoint, H, propertiesTRho, S, saturationP, saturationT, type Fluid, type Saturation } from "../eos/index.js";
+import { equationCriticalPoint, H, propertiesTRho, S, saturationP, saturationPressureRange, saturationT, type Fluid, type Saturation } from "../eos/index.js";
 import { attempt, type Context } from "./context.js";
 
 /** Both ends of a tie line, mass-based, h and s in the chosen reference; densities molar [mol/m³]. */
@@ -152,8 +152,7 @@ export function makeTieLines(ctx: Context): TieLines {
     }
     return t;
   };
-  const pTriple = f.data.triple.pVapour;
-  const Tfloor = pMin > pTriple ? attempt(() => saturationP(f, pMin))?.TL ?? f.Tmin : f.Tmin;
+  const Tfloor = pMin > saturationPressureRange(f)[0] ? attempt(() => saturationP(f, pMin))?.TL ?? f.Tmin : f.Tmin;
   const lo = sigmaOfT(Math.min(Math.max(Tfloor, f.Tmin), top));
   return { lo, hi: sigmaOfT(top), at };
 }

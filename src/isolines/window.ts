@@ -1,6 +1,6 @@
 // The chart window a fluid gets unless the caller sets one: the dome from a low practical temperature (or the
 // triple point) up to 1.5–2 × p_c, and enthalpy from the cold liquid to vapour well superheated.
-import { flashTP, H, propertiesTRho, saturationT, type Fluid, type ReferenceName, referenceOffset } from "../eos/index.js";
+import { flashTP, H, propertiesTRho, referenceOffset, saturationPressureRange, saturationT, type Fluid, type ReferenceName } from "../eos/index.js";
 import { inputError } from "../errors.js";
 import { fromDisplay, toDisplay } from "./display.js";
 import { clean, niceAtLeast, niceAtMost, ONE_TWO_FIVE, WINDOW_MANTISSAS } from "./nice.js";
@@ -16,9 +16,9 @@ export function hotTemperature(f: Fluid): number {
   return Math.min(f.Tmax, 1.3 * f.Tc);
 }
 
-/** Lowest pressure with a saturated liquid: the triple point (pure fluids) or the bubble pressure at T_min (blends). */
+/** Lowest pressure with a saturated liquid: at the triple point (pure fluids) or the bubble pressure at T_min (blends). */
 export function domeFloorPressure(f: Fluid): number {
-  return f.pseudoPure ? f.pBubble!.value(f.Tmin) : f.data.triple.pVapour;
+  return saturationPressureRange(f)[0];
 }
 
 export function autoWindow(f: Fluid, reference: ReferenceName, units: UnitSystem): ChartWindow {
@@ -64,5 +64,9 @@ export function resolveWindow(auto: ChartWindow, overrides: Partial<ChartWindow>
   if (!(w.pMin > 0)) throw inputError("window.pMin", w.pMin, "must be positive (the pressure axis is logarithmic)", "pMin > 0 Pa");
   if (!(w.pMax > w.pMin)) throw inputError("window.pMax", w.pMax, `not above window.pMin = ${w.pMin} Pa`, "pMax > pMin");
   if (w.pMin >= f.pmax) throw inputError("window.pMin", w.pMin, `at or above the equation's p_max for ${f.id}`, `pMin < ${f.pmax} Pa`);
+  // A floor on the dome's lowest pressure is lifted by a rounding error: the engine's saturation at T_min can
+  // land an ulp below that pressure, and the engine would call such a point solid.
+  const floor = domeFloorPressure(f);
+  if (Math.abs(w.pMin / floor - 1) < 4e-12) w.pMin = floor * (1 + 4e-12);
   return w;
 }
