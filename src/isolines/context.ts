@@ -1,6 +1,6 @@
 // What every line of one line-set build shares: the fluid, its reference offsets, the page mapping and
 // tolerance, scratch space for explicit (T, ρ) evaluations, and the counters of the trace.
-import { type Fluid, type ReferenceName, type ReferenceOffset, H, P, propertiesTRho, PROP_SLOTS, referenceOffset, S } from "../eos/index.js";
+import { type Fluid, type ReferenceName, type ReferenceOffset, H, P, propertiesTRho, PROP_SLOTS, referenceOffset } from "../eos/index.js";
 import { DomeprintError } from "../errors.js";
 import type { PageMapping } from "./page.js";
 import type { TraceSettings } from "./trace.js";
@@ -41,12 +41,6 @@ export function pointTRho(ctx: Context, T: number, rho: number): Point | null {
   const p = o[P]!;
   if (!(p > 0) || p > ctx.f.pmax) return null;
   return [o[H]! + ctx.off.dh, p];
-}
-
-/** Entropy [J/(kg K)] in the chosen reference at T [K] and molar density ρ [mol/m³]. */
-export function entropyTRho(ctx: Context, T: number, rho: number): number {
-  propertiesTRho(ctx.f.model, ctx.f.M, T, rho, ctx.scratch);
-  return ctx.scratch[S]! + ctx.off.ds;
 }
 
 /** Runs an engine call, turning its typed errors into "not defined here"; anything else is a bug and propagates. */

@@ -4,7 +4,7 @@ import { H, P, propertiesTRho } from "../eos/index.js";
 import type { Context } from "./context.js";
 import { inWindow, pageDistance } from "./page.js";
 import type { TieLines } from "./tie-lines.js";
-import { traceCurve } from "./trace.js";
+import { EDGE_MM, traceCurve } from "./trace.js";
 import type { Point } from "./types.js";
 
 /** The critical point as the dome closes on it: the equation evaluated at the fluid's stated T_c and ρ_c. */
@@ -30,6 +30,6 @@ export function traceSaturationLine(ctx: Context, tie: TieLines, x: 0 | 1): Poin
   const last = pieces[pieces.length - 1];
   const c = criticalPoint(ctx);
   const apex: Point = [c.h, c.p];
-  if (top && last && pageDistance(ctx.mapping, last[last.length - 1]!, top) < 1e-3 && inWindow(ctx.mapping.window, apex)) last.push(apex);
+  if (top && last && pageDistance(ctx.mapping, last[last.length - 1]!, top) < EDGE_MM && inWindow(ctx.mapping.window, apex)) last.push(apex);
   return pieces;
 }

@@ -4,7 +4,7 @@ import { flashPS } from "../eos/index.js";
 import { attempt, pointTRho, type Context } from "./context.js";
 import { twoPhaseStretches, type Boundary } from "./dome-crossings.js";
 import { densityTS } from "./entropy-density.js";
-import { aboveDome, MERGE_MM, OVER_TOP_MM, traceInDome } from "./isochore.js";
+import { aboveDome, MERGE_MM, OVER_TOP_MM, traceInDome } from "./in-dome.js";
 import type { TieLine, TieLines } from "./tie-lines.js";
 import { bridge, joinParts, traceCurve } from "./trace.js";
 import type { Point } from "./types.js";

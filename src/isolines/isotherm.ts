@@ -2,9 +2,9 @@
 // saturation pressure (pure fluids) or a glide segment from bubble to dew with T linear in quality (blends).
 import { densityTP, saturationT, type Branch, type Saturation } from "../eos/index.js";
 import { attempt, pointTRho, type Context } from "./context.js";
-import { isTieLine, mixTie, type TieLines } from "./tie-lines.js";
 import { pageDistance } from "./page.js";
-import { bridge, joinParts, traceCurve } from "./trace.js";
+import { isTieLine, mixTie, type TieLines } from "./tie-lines.js";
+import { bridge, EDGE_MM, joinParts, traceCurve } from "./trace.js";
 import type { Point } from "./types.js";
 
 /**
@@ -80,7 +80,7 @@ function bridgeable(ctx: Context, before: Point[][], after: Point[][], end: Poin
   const last = before[before.length - 1], first = after[0];
   if (!last || !first || !end || !start) return false;
   const m = ctx.mapping;
-  const near = (a: Point, b: Point) => pageDistance(m, a, b) < 1e-3;
+  const near = (a: Point, b: Point) => pageDistance(m, a, b) < EDGE_MM;
   return near(last[last.length - 1]!, end) && near(first[0]!, start) && Math.abs(m.y(end[1]) - m.y(start[1])) <= ctx.trace.toleranceMm;
 }
 
@@ -115,7 +115,8 @@ export function traceIsotherm(ctx: Context, tie: TieLines, T: number): Point[][]
     }
     return joinParts(ctx.mapping, parts);
   }
-  // One phase all the way (or the last millikelvin below the critical point, where the loop is invisible).
+  // One phase all the way; or the band between satTmax and the equation's own T_c that the saturation solver
+  // leaves out (1 mK; 19 mK for oxygen), where the isotherm's loop dips by under 3e-5 p_c, far below a line width.
   const twoRoots = T < Math.max(f.Tc, f.TcEquation);
   const top = density(pTop, twoRoots ? "liquid" : "single");
   const bottom = density(pBottom, twoRoots ? "vapour" : "single");

@@ -18,21 +18,6 @@ import {
 } from "./values.js";
 import { autoWindow, resolveWindow } from "./window.js";
 
-function lines(opts: CheckedOptions, q: Quantity, v: FamilyValue, pieces: Point[][]): Line[] {
-  return pieces.map((points) => ({
-    quantity: q,
-    value: v.si,
-    unit: SI_UNIT[q],
-    display: { value: v.display, unit: q === "saturation-liquid" || q === "saturation-vapour" ? "" : displaySymbol(opts, q) },
-    rank: v.rank,
-    points,
-  }));
-}
-
-function displaySymbol(opts: CheckedOptions, q: Quantity): string {
-  return displayUnit(opts.units, q).symbol;
-}
-
 interface Build {
   f: Fluid;
   opts: CheckedOptions;
@@ -42,34 +27,52 @@ interface Build {
   tie: TieLines;
 }
 
-function valuesOf(b: Build, family: "isotherms" | "isentropes" | "isochores" | "qualities" | "isenthalps", q: Quantity, auto: () => FamilyValue[]): FamilyValue[] {
+/** One family value's traced pieces as lines (a value the window or the equation cuts in two gives two). */
+function lines(b: Build, q: Quantity, v: FamilyValue, pieces: Point[][]): Line[] {
+  const display = { value: v.display, unit: displayUnit(b.opts.units, q).symbol };
+  return pieces.map((points) => ({ quantity: q, value: v.si, unit: SI_UNIT[q], display: { ...display }, rank: v.rank, points }));
+}
+
+type ValueFamily = "isotherms" | "isentropes" | "isochores" | "qualities" | "isenthalps";
+
+/** The caller's values of a family if given (SI), else the automatic round ones. */
+function valuesOf(b: Build, family: ValueFamily, q: Quantity, auto: () => FamilyValue[]): FamilyValue[] {
   const given = b.opts.values[family];
   return given ? givenValues(b.opts.units, q, given) : auto();
 }
 
+function domeLines(b: Build): Line[] {
+  return [
+    ...lines(b, "saturation-liquid", { si: 0, display: 0, rank: "major" }, traceSaturationLine(b.ctx, b.tie, 0)),
+    ...lines(b, "saturation-vapour", { si: 1, display: 1, rank: "major" }, traceSaturationLine(b.ctx, b.tie, 1)),
+  ];
+}
+
+function isotherms(b: Build): Line[] {
+  const { f, opts } = b;
+  const values = valuesOf(b, "isotherms", "temperature", () => isothermValues(f, opts.units, b.ranges, b.mapping, opts.reference, opts.densities));
+  return values.filter((v) => v.si >= f.Tmin && v.si <= f.Tmax).flatMap((v) => lines(b, "temperature", v, traceIsotherm(b.ctx, b.tie, v.si)));
+}
+
+/** Isenthalps are the vertical grid: their round values, as lines across the window's full height. */
+function isenthalps(b: Build): Line[] {
+  const w = b.mapping.window;
+  return valuesOf(b, "isenthalps", "enthalpy", () => isenthalpValues(b.opts.units, b.mapping, b.opts.densities))
+    .filter((v) => v.si >= w.hMin && v.si <= w.hMax)
+    .flatMap((v) => lines(b, "enthalpy", v, [[[v.si, w.pMin], [v.si, w.pMax]]]));
+}
+
 function traceFamilies(b: Build): Line[] {
-  const { f, opts, ctx, tie, mapping, ranges } = b;
-  const out: Line[] = [];
-  const fam = opts.families;
-  const d = opts.densities;
-  if (fam.dome) {
-    out.push(...lines(opts, "saturation-liquid", { si: 0, display: 0, rank: "major" }, traceSaturationLine(ctx, tie, 0)));
-    out.push(...lines(opts, "saturation-vapour", { si: 1, display: 1, rank: "major" }, traceSaturationLine(ctx, tie, 1)));
-  }
-  if (fam.qualities) for (const v of valuesOf(b, "qualities", "quality", () => qualityValues(d))) out.push(...lines(opts, "quality", v, traceQualityLine(ctx, tie, v.si)));
-  if (fam.isotherms) {
-    const values = valuesOf(b, "isotherms", "temperature", () => isothermValues(f, opts.units, ranges, mapping, opts.reference, d));
-    for (const v of values) if (v.si >= f.Tmin && v.si <= f.Tmax) out.push(...lines(opts, "temperature", v, traceIsotherm(ctx, tie, v.si)));
-  }
-  if (fam.isentropes) for (const v of valuesOf(b, "isentropes", "entropy", () => isentropeValues(opts.units, ranges, d))) out.push(...lines(opts, "entropy", v, traceIsentrope(ctx, tie, v.si)));
-  if (fam.isochores) for (const v of valuesOf(b, "isochores", "specific-volume", () => isochoreValues(f, opts.units, ranges, d))) out.push(...lines(opts, "specific-volume", v, traceIsochore(ctx, tie, v.si)));
-  if (fam.isenthalps) {
-    const w = mapping.window;
-    for (const v of valuesOf(b, "isenthalps", "enthalpy", () => isenthalpValues(opts.units, mapping, d))) {
-      if (v.si >= w.hMin && v.si <= w.hMax) out.push(...lines(opts, "enthalpy", v, [[[v.si, w.pMin], [v.si, w.pMax]]]));
-    }
-  }
-  return out;
+  const { opts, ctx, tie, ranges } = b;
+  const d = opts.densities, on = opts.families;
+  return [
+    ...(on.dome ? domeLines(b) : []),
+    ...(on.qualities ? valuesOf(b, "qualities", "quality", () => qualityValues(d)).flatMap((v) => lines(b, "quality", v, traceQualityLine(ctx, tie, v.si))) : []),
+    ...(on.isotherms ? isotherms(b) : []),
+    ...(on.isentropes ? valuesOf(b, "isentropes", "entropy", () => isentropeValues(opts.units, ranges, d)).flatMap((v) => lines(b, "entropy", v, traceIsentrope(ctx, tie, v.si))) : []),
+    ...(on.isochores ? valuesOf(b, "isochores", "specific-volume", () => isochoreValues(b.f, opts.units, ranges, d)).flatMap((v) => lines(b, "specific-volume", v, traceIsochore(ctx, tie, v.si))) : []),
+    ...(on.isenthalps ? isenthalps(b) : []),
+  ];
 }
 
 /**

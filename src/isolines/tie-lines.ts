@@ -5,7 +5,6 @@ import { attempt, type Context } from "./context.js";
 
 /** Both ends of a tie line, mass-based, h and s in the chosen reference; densities molar [mol/m³]. */
 export interface TieLine {
-  sigma: number;
   TL: number;
   TV: number;
   pL: number;
@@ -28,12 +27,12 @@ export interface TieLines {
   at(sigma: number): TieLine | null;
 }
 
-/** The phase boundary for two-phase states at quality x on a tie line: (h, p) and T. */
+/** The two-phase state at quality x on a tie line: (h, p), and T (which runs across a blend's glide). */
 export function mixTie(t: TieLine, x: number): { h: number; p: number; T: number } {
   return { h: t.hL + x * (t.hV - t.hL), p: t.pL + x * (t.pV - t.pL), T: t.TL + x * (t.TV - t.TL) };
 }
 
-function fromSaturation(ctx: Context, sigma: number, sat: Saturation): TieLine {
+function fromSaturation(ctx: Context, sat: Saturation): TieLine {
   const { f, off } = ctx;
   const o = ctx.scratch;
   propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
@@ -41,15 +40,15 @@ function fromSaturation(ctx: Context, sigma: number, sat: Saturation): TieLine {
   propertiesTRho(f.model, f.M, sat.TV, sat.rhoV, o);
   const hV = o[H]! + off.dh, sV = o[S]! + off.ds;
   return {
-    sigma, TL: sat.TL, TV: sat.TV, pL: sat.pL, pV: sat.pV,
+    TL: sat.TL, TV: sat.TV, pL: sat.pL, pV: sat.pV,
     rhoL: sat.rhoL, rhoV: sat.rhoV, hL, hV, sL, sV, vL: 1 / (sat.rhoL * f.M), vV: 1 / (sat.rhoV * f.M),
   };
 }
 
 /**
- * Whether a pure fluid's saturation result is a tie line and not the trivial solution ρL = ρV the solver can
- * fall onto within a few millikelvin of the critical point: the density gap must be at least
- * ρc·√((Tc − T)/Tc), a fifth of what classical scaling gives for every fluid shipped.
+ * Whether a pure fluid's saturation result is a tie line and not the trivial solution ρL ≈ ρV the solver can
+ * fall onto within a few millikelvin of the critical point: the density gap must be at least ρc·√((Tc − T)/Tc).
+ * Genuine tie lines of every fluid shipped have more than four times that, from 2 K below Tc to satTmax.
  */
 export function isTieLine(f: Fluid, sat: Saturation): boolean {
   const d = Math.max(f.TcEquation - sat.TL, 0) / f.TcEquation;
@@ -61,7 +60,10 @@ function pureSaturation(f: Fluid, T: number): Saturation | null {
   return sat && isTieLine(f, sat) ? sat : null;
 }
 
-/** The highest temperature up to satTmax whose saturation is a genuine tie line (a few tries downwards). */
+/**
+ * The highest temperature up to satTmax whose saturation is a genuine tie line: satTmax, or 1, 2, 4 … mK below
+ * it. Past 1 K down the solver is far from trouble; 2 K below satTmax stands in should it still fail.
+ */
 function pureTop(f: Fluid): number {
   for (let k = 0; k < 12; k++) {
     const T = f.satTmax - (k === 0 ? 0 : 1e-3 * 2 ** (k - 1));
@@ -94,8 +96,8 @@ function blendSaturation(f: Fluid, p: number): Saturation | null {
 }
 
 /**
- * The highest pressure up to which a blend's tie lines are genuine without a break from the window's floor:
- * a scan in steps that shrink towards p_c, then bisection on the first failure. Cached per fluid.
+ * The highest pressure up to which a blend's tie lines stay genuine: a scan up from 0.9 p_c in steps that shrink
+ * towards p_c (the last 1e-8 p_c short of it), then bisection on the first failure. Cached per fluid.
  */
 const blendTopCache = new WeakMap<Fluid, number>();
 function blendTop(f: Fluid): number {
@@ -122,7 +124,7 @@ export function makeTieLines(ctx: Context): TieLines {
   const cache = new Map<number, TieLine | null>();
   const pMin = ctx.mapping.window.pMin;
   if (f.pseudoPure) {
-    const floor = f.pBubble!.value(f.Tmin);
+    const floor = saturationPressureRange(f)[0];
     const lo = Math.log(Math.max(floor, pMin));
     const hi = Math.log(blendTop(f));
     const at = (sigma: number): TieLine | null => {
@@ -130,7 +132,7 @@ export function makeTieLines(ctx: Context): TieLines {
       if (t === undefined) {
         // exp(ln p) can round below the lowest bubble pressure, which the engine would then call solid.
         const sat = blendSaturation(f, Math.max(Math.exp(sigma), floor));
-        t = sat ? fromSaturation(ctx, sigma, sat) : null;
+        t = sat ? fromSaturation(ctx, sat) : null;
         cache.set(sigma, t);
       }
       return t;
@@ -147,7 +149,7 @@ export function makeTieLines(ctx: Context): TieLines {
     if (t === undefined) {
       const T = Math.min(Math.max(TofSigma(sigma), f.Tmin), top);
       const sat = pureSaturation(f, T);
-      t = sat ? fromSaturation(ctx, sigma, sat) : null;
+      t = sat ? fromSaturation(ctx, sat) : null;
       cache.set(sigma, t);
     }
     return t;

@@ -25,8 +25,8 @@ const JUMP_MM = 0.5;
  * a jump one half keeps nearly the whole chord, however fine the split. Such chords are refined down to the cap.
  */
 const JUMP_SHARE = 0.9;
-/** Window edges and validity ends are located to this distance on the page. */
-const EDGE_MM = 1e-3;
+/** Window edges and validity ends are located to this distance on the page; ends closer than it are one point. */
+export const EDGE_MM = 1e-3;
 /** Levels of midpoints probed between two samples that both lie outside, to catch a short visit to the window. */
 const PROBE_DEPTH = 2;
 
