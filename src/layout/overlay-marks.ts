@@ -64,9 +64,13 @@ export function overlayMarks(overlays: Overlay[], scales: ChartScales, style: Ov
     if (overlay.closed && path.length > 1) path.push(path[0]!);
     const owner = `overlay-${i}`;
     owners.push(owner);
-    for (const piece of clipPolyline(toPage(scales, path), scales.frame)) {
-      marks.push({ kind: "path", points: piece, stroke, data: { overlay: overlay.name, kind: overlay.kind } });
-      obstacles.addPolyline(owner, piece);
+    // Side streams (a flash tank's vapour, an economiser's injection) are drawn like the main path.
+    const branches = (overlay.branches ?? []).map((b) => b.map((q) => [q.h, q.p] as const));
+    for (const line of [path, ...branches]) {
+      for (const piece of clipPolyline(toPage(scales, line), scales.frame)) {
+        marks.push({ kind: "path", points: piece, stroke, data: { overlay: overlay.name, kind: overlay.kind } });
+        obstacles.addPolyline(owner, piece);
+      }
     }
     for (const point of overlay.points) {
       const x = scales.x(point.h), y = scales.y(point.p);

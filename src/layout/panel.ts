@@ -130,21 +130,43 @@ function setItems(panel: Panel, c: Ctx, x: number, y: number, out: Mark[] | unde
   return cursor - y;
 }
 
+/**
+ * Column widths that fill the panel: spare width is shared out evenly; when the table is too wide, the
+ * widest columns give way first (water-filling), and their cells are shortened with an ellipsis.
+ */
+export function fitColumns(natural: number[], width: number): number[] {
+  const total = natural.reduce((a, b) => a + b, 0);
+  if (total <= width) return natural.map((w) => w + (width - total) / natural.length);
+  let cap = width / natural.length;
+  // Raise the cap until the columns under it plus the capped ones fill the width.
+  const sorted = [...natural].sort((a, b) => a - b);
+  let used = 0;
+  for (let i = 0; i < sorted.length; i++) {
+    const rest = sorted.length - i;
+    const share = (width - used) / rest;
+    if (sorted[i]! > share) {
+      cap = share;
+      break;
+    }
+    used += sorted[i]!;
+    cap = sorted[i]!;
+  }
+  return natural.map((w) => Math.min(w, cap));
+}
+
 function setTable(item: Extract<PanelItem, { kind: "table" }>, c: Ctx, x: number, y: number, out: Mark[] | undefined): number {
   const s = c.style;
   const pt = s.pt;
   const lh = lineHeight(pt);
-  const widths = tableWidths(item, pt);
-  // Spare width is shared out evenly, so the table fills its panel instead of hugging the left edge.
-  const spare = Math.max(0, (inner(c) - widths.reduce((a, b) => a + b, 0)) / widths.length);
-  const cols = widths.map((w) => w + spare);
+  const cols = fitColumns(tableWidths(item, pt), inner(c));
   const cell = (row: string[], top: number, weight: "normal" | "bold", colour: string) => {
     let left = x;
     row.forEach((content, j) => {
       const w = cols[j]!;
       const right = item.align[j] === "end";
-      const shown = fit(content, pt, w - textWidth("0", pt), weight);
-      out?.push(text(right ? left + w - textWidth("0", pt) / 2 : left, top + lh * 0.78, shown, pt, colour, { weight, ...(right ? { anchor: "end" } : {}) }));
+      const shown = fit(content, pt, w - 1.5 * textWidth("0", pt), weight);
+      // Right-set cells stop a figure's width short of the next column, so neighbours never touch.
+      out?.push(text(right ? left + w - textWidth("0", pt) : left, top + lh * 0.78, shown, pt, colour, { weight, ...(right ? { anchor: "end" } : {}) }));
       left += w;
     });
   };
@@ -176,7 +198,7 @@ export function drawPanel(panel: Panel, style: PanelStyle, x: number, y: number,
   const marks: Mark[] = [rect(x, y, width, height, { colour: style.fill }, style.stroke)];
   const band = titleHeight(style);
   marks.push(rect(x, y, width, band, { colour: style.titleFill }));
-  marks.push(text(x + style.padding, y + band / 2, panel.title, style.titlePt, style.titleInk, { weight: "bold", baseline: "middle" }));
+  marks.push(text(x + style.padding, y + band / 2, fit(panel.title, style.titlePt, width - 2 * style.padding, "bold"), style.titlePt, style.titleInk, { weight: "bold", baseline: "middle" }));
   setItems(panel, { style, width }, x + style.padding, y + band + style.padding, marks);
   return marks;
 }

@@ -15,7 +15,7 @@ import { thinLines } from "./line-thinning.js";
 import { rect, text } from "./marks.js";
 import { sceneMeta } from "./sheet-meta.js";
 import { overlayMarks } from "./overlay-marks.js";
-import { drawPanel, panelHeight, type Panel, type PanelStyle } from "./panel.js";
+import { drawPanel, fitColumns, panelHeight, tableWidth, type Panel, type PanelStyle } from "./panel.js";
 import type { Overlay } from "../cycle/overlay.js";
 import { arrangePanels, type PlacedPanel } from "./panel-arrangement.js";
 import type { PagePlan } from "./plan.js";
@@ -176,8 +176,19 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
 function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): PlacedPanel[] {
   if (panels.length === 0) return [];
   const band = plan.overlayBand;
-  const width = (band.width - plan.gap * (panels.length - 1)) / panels.length;
-  return panels.map((panel, i) => ({ panel, rect: { x: band.x + i * (width + plan.gap), y: band.y, width, height: band.height } }));
+  // Tables share the band as columns of a table do: the widest give way first.
+  const natural = panels.map((p) => {
+    const item = p.items.find((i) => i.kind === "table");
+    return item && item.kind === "table" ? tableWidth(item, style) : 1;
+  });
+  const widths = fitColumns(natural, band.width - plan.gap * (panels.length - 1));
+  let x = band.x;
+  return panels.map((panel, i) => {
+    const width = widths[i]!;
+    const rect = { x, y: band.y, width, height: band.height };
+    x += width + plan.gap;
+    return { panel, rect };
+  });
 }
 
 /** Height the overlay tables need in the band under the plot, at the style's panel type on this paper. */

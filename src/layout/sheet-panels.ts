@@ -111,12 +111,15 @@ export function saturationTablePanel(rows: SaturationRow[], units: DisplayUnits,
   };
 }
 
+/** A cell that reads as a number (with a unit after it, or empty): such columns are set flush right. */
+const NUMERIC = /^$|^[\u2212+-]?\d[\d.,]*(\s*\S+)?$/;
+
 export function overlayPanels(overlays: Overlay[]): Panel[] {
   return overlays.flatMap((o, i) =>
     o.tables.map((t, j) => ({
       id: `overlay-${i}-${j}`,
       title: t.title === o.name ? t.title : `${o.name}: ${t.title}`,
-      items: [{ kind: "table" as const, columns: t.columns, units: t.columns.map(() => ""), rows: t.rows, align: t.columns.map((_, k) => (k === 0 ? "start" : "end") as "start" | "end") }],
+      items: [{ kind: "table" as const, columns: t.columns, units: t.columns.map(() => ""), rows: t.rows, align: t.columns.map((_, k) => (t.rows.every((r) => NUMERIC.test(r[k] ?? "")) ? "end" : "start") as "start" | "end") }],
     })),
   );
 }

@@ -50,12 +50,21 @@ export function rectPolygon(r: { x: number; y: number; width: number; height: nu
   return [[r.x, r.y], [r.x + r.width, r.y], [r.x + r.width, r.y + r.height], [r.x, r.y + r.height]];
 }
 
+function crosses(poly: Point[], path: PathMark): boolean {
+  for (let k = 0; k + 3 < path.points.length; k += 2) {
+    if (convexIntersect(poly, [[path.points[k]!, path.points[k + 1]!], [path.points[k + 2]!, path.points[k + 3]!]])) return true;
+  }
+  return false;
+}
+
 export interface LabelProblems {
   labels: number;
   overlaps: string[];
   outsideFrame: string[];
   onPanels: string[];
   onDome: string[];
+  /** Labels crossing a cycle's or readings' path. */
+  onOverlays: string[];
 }
 
 function layerMarks<T>(scene: Scene, id: string, kind: string): T[] {
@@ -68,23 +77,15 @@ export function labelProblems(scene: Scene): LabelProblems {
   const frame = (scene.meta.attributes as { plotFrame: { x: number; y: number; width: number; height: number } }).plotFrame;
   const panels = layerMarks<RectMark>(scene, "panels", "rect").map(rectPolygon);
   const dome = layerMarks<PathMark>(scene, "dome", "path");
-  const problems: LabelProblems = { labels: labels.length, overlaps: [], outsideFrame: [], onPanels: [], onDome: [] };
+  const overlays = layerMarks<PathMark>(scene, "cycles", "path");
+  const problems: LabelProblems = { labels: labels.length, overlaps: [], outsideFrame: [], onPanels: [], onDome: [], onOverlays: [] };
   for (let i = 0; i < polys.length; i++) {
     for (let j = i + 1; j < polys.length; j++) if (convexIntersect(polys[i]!, polys[j]!)) problems.overlaps.push(`${labels[i]!.text} × ${labels[j]!.text}`);
     const inside = polys[i]!.every(([x, y]) => x > frame.x && x < frame.x + frame.width && y > frame.y && y < frame.y + frame.height);
     if (!inside) problems.outsideFrame.push(labels[i]!.text);
     if (panels.some((p) => convexIntersect(polys[i]!, p))) problems.onPanels.push(labels[i]!.text);
-    for (const path of dome) {
-      let hit = false;
-      for (let k = 0; k + 3 < path.points.length && !hit; k += 2) {
-        const seg: Point[] = [[path.points[k]!, path.points[k + 1]!], [path.points[k + 2]!, path.points[k + 3]!]];
-        hit = convexIntersect(polys[i]!, seg);
-      }
-      if (hit) {
-        problems.onDome.push(labels[i]!.text);
-        break;
-      }
-    }
+    if (dome.some((path) => crosses(polys[i]!, path))) problems.onDome.push(labels[i]!.text);
+    if (overlays.some((path) => crosses(polys[i]!, path))) problems.onOverlays.push(labels[i]!.text);
   }
   return problems;
 }
