@@ -67,4 +67,6 @@ export interface SheetContent {
   units: DisplayUnits;
   fields: UserFields;
   stamp: { date: string; version: string; hash: string };
+  /** Line spacings were chosen by the user: draw every line, however tight the paper. */
+  spacingGiven?: boolean;
 }

@@ -79,7 +79,8 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
   const strokes = familyStrokes(style, plan);
   // Lines closer than about 7 mm (isotherms) or 9 mm (isentropes, isochores) at A4 crowd out their labels.
   const budget = { temperature: Math.floor(plan.plot.width / sizes.mm(7)), entropy: Math.floor(plan.plot.width / sizes.mm(9)), "specific-volume": Math.floor(plan.plot.height / sizes.mm(9)) };
-  const drawn = drawnLines({ ...content.lines, lines: thinLines(content.lines.lines, units, budget) }, scales);
+  const chosen = content.spacingGiven ? content.lines.lines : thinLines(content.lines.lines, units, budget);
+  const drawn = drawnLines({ ...content.lines, lines: chosen }, scales);
 
   // Panels first: their rectangles are obstacles for everything placed later.
   const families = new Set(drawn.map((d) => d.family));

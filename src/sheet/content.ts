@@ -12,6 +12,7 @@ import type { LineSet } from "../isolines/index.js";
 import type { FluidIdentity, SaturationRow, SaturationTick } from "../layout/content.js";
 import { toDisplay, type DisplayUnits } from "../layout/display-units.js";
 import { toSI } from "../units/index.js";
+import type { SheetLineOptions } from "./options.js";
 
 /** IIR where the fluid has a saturated liquid at 0 °C, else NBP, else the equation's own: the refrigeration habit. */
 export function defaultReference(f: Fluid): ReferenceName {
@@ -108,15 +109,18 @@ export interface EngineData {
   lines: LineSet;
 }
 
-/** The LineSet traced for the planned plot frame, so its 0.05 mm tolerance holds on this paper. */
-export function engineData(fluid: Fluid, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }): EngineData {
+/**
+ * The LineSet traced for the planned plot frame, so its 0.05 mm tolerance holds on this paper. Unless
+ * asked for, no isenthalps (the grid carries enthalpy) and no 5-degree isotherms (no room for labels).
+ */
+export function engineData(fluid: Fluid, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }, given: SheetLineOptions = {}): EngineData {
   const lines = buildLineSet(fluid.id, {
     units: units.system,
     reference: ref,
     frame: { widthMm: frame.width, heightMm: frame.height },
-    // The grid carries enthalpy, and 5-degree isotherms would be lines without room for labels.
-    families: { isenthalps: false },
-    densities: { minorIsothermSpacingMm: 0 },
+    ...(given.window ? { window: given.window } : {}),
+    families: { isenthalps: false, ...given.families },
+    densities: { minorIsothermSpacingMm: 0, ...given.densities },
   });
   return { fluid, reference: ref, lines };
 }

@@ -8,6 +8,10 @@ import { checkPressureUnit, checkUnitSystem, type PressureUnitName, type UnitSys
 import type { UserFields } from "../layout/content.js";
 import type { Orientation } from "../layout/paper.js";
 import type { Style } from "../layout/style.js";
+import type { LineSetOptions } from "../isolines/index.js";
+
+/** What a sheet passes on to the isoline generator: window limits (SI), line spacings and families. */
+export type SheetLineOptions = Pick<LineSetOptions, "window" | "densities" | "families">;
 
 export const FORMATS = ["pdf", "svg", "png", "json"] as const;
 export type Format = (typeof FORMATS)[number];
@@ -45,6 +49,8 @@ export interface SheetOptions {
   overlays?: Overlay[];
   /** Readings files to evaluate against the fluid in the sheet's reference state and draw as points. */
   pointsFiles?: string[];
+  /** Window and line choices for the isoline generator; given spacings are drawn as asked, never thinned. */
+  lineOptions?: SheetLineOptions;
 }
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -87,6 +93,7 @@ export interface CheckedSheetOptions {
   date: string;
   overlays: Overlay[];
   pointsFiles: string[];
+  lineOptions: SheetLineOptions;
 }
 
 function checkFields(fields: UserFields | undefined): UserFields {
@@ -130,5 +137,6 @@ export function checkSheetOptions(o: SheetOptions): CheckedSheetOptions {
     date: o.date === undefined ? today() : checkDate(o.date),
     overlays: o.overlays ?? [],
     pointsFiles: o.pointsFiles ?? [],
+    lineOptions: o.lineOptions ?? {},
   };
 }

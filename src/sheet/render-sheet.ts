@@ -86,7 +86,7 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
     ...(o.margin !== undefined ? { margin: o.margin } : {}),
     overlayBand: overlayBandHeight(style, paper, overlays, o.margin),
   });
-  const data = engineData(fluid, reference, units, plan.plot);
+  const data = engineData(fluid, reference, units, plan.plot, o.lineOptions);
   const identity = fluidIdentity(data.fluid, data.reference);
   const atmosphere = atmosphereAt(o.altitude);
   // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
@@ -101,6 +101,7 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
     units,
     fields: o.fields,
     stamp: { date: o.date, version: VERSION, hash },
+    ...(o.lineOptions.densities && Object.keys(o.lineOptions.densities).length > 0 ? { spacingGiven: true } : {}),
   };
   const laid = layoutSheet(plan, content, style);
   const scene: Scene = { ...laid.scene, bleed: o.bleed, cropMarks: o.cropMarks };
