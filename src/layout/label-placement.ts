@@ -100,22 +100,34 @@ export class LabelPlacer {
     return !input.obstacles.hitsOwners(c.box, input.hardOwners, request.beside ? undefined : request.owner);
   }
 
-  private score(c: Candidate, request: LabelRequest): number {
+  /** The score without crowding: cheap, and a lower bound of the full score. */
+  private baseScore(c: Candidate, request: LabelRequest): number {
     const { input } = this;
-    const crowding = Math.min(input.lines.segmentOwners(c.box, request.owner).size, 6);
     const anchors = this.familyAnchors.get(request.family) ?? [];
     const along = request.align === "row" ? c.y : c.x;
     const span = request.align === "row" ? input.region.height : input.region.width;
-    const alignment = anchors.length === 0 ? 0 : Math.min(...anchors.map((a) => Math.abs(a - along))) / span;
+    let nearest = Infinity;
+    for (const a of anchors) nearest = Math.min(nearest, Math.abs(a - along));
+    const alignment = anchors.length === 0 ? 0 : nearest / span;
     const steep = Math.max(0, Math.abs(c.rotate) - 60) / 30;
-    return WEIGHT.prefer * request.prefer(c.x, c.y) + WEIGHT.crowding * crowding + WEIGHT.alignment * Math.min(alignment * 4, 1) + WEIGHT.steep * steep;
+    return WEIGHT.prefer * request.prefer(c.x, c.y) + WEIGHT.alignment * Math.min(alignment * 4, 1) + WEIGHT.steep * steep;
   }
 
-  private best(request: LabelRequest, candidates: Candidate[], extraScore?: (c: Candidate) => number): Scored | undefined {
+  private crowding(c: Candidate, request: LabelRequest): number {
+    return WEIGHT.crowding * Math.min(this.input.lines.segmentOwners(c.box, request.owner).size, 6);
+  }
+
+  /**
+   * The best feasible candidate. Crowding (a grid query) is only counted for candidates whose cheaper
+   * terms could still beat the best so far, and feasibility only for those that could win at all.
+   */
+  private best(request: LabelRequest, candidates: Candidate[]): Scored | undefined {
     let best: Scored | undefined;
-    for (const candidate of candidates) {
+    const ranked = candidates.map((candidate) => ({ candidate, base: this.baseScore(candidate, request) })).sort((a, b) => a.base - b.base);
+    for (const { candidate, base } of ranked) {
+      if (best && base >= best.score) break;
       if (!this.feasible(candidate, request)) continue;
-      const score = this.score(candidate, request) + (extraScore ? extraScore(candidate) : 0);
+      const score = base + this.crowding(candidate, request);
       if (!best || score < best.score) best = { candidate, score };
     }
     return best;
