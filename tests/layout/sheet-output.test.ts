@@ -111,6 +111,20 @@ describe.skipIf(!hasTool("pdfinfo"))("page boxes of other papers (skipped withou
   });
 });
 
+describe.skipIf(!hasTool("pdfinfo"))("print-shop options (skipped without poppler-utils)", () => {
+  it("puts the trimmed A4 page inside a 3 mm bleed and room for crop marks", async () => {
+    const sheet = await renderSheet({ fluid: "R32", paper: "A4", bleed: 3, cropMarks: true, cmyk: true, formats: ["pdf"], date: "2025-03-14" });
+    const boxes = popplerText("pdfinfo", sheet.pdf!, ["-box"]);
+    const box = (name: string) => boxes.match(new RegExp(`${name}:\\s+([\\d.]+)\\s+([\\d.]+)\\s+([\\d.]+)\\s+([\\d.]+)`))!.slice(1).map(Number);
+    const [tx0, ty0, tx1, ty1] = box("TrimBox");
+    const [bx0, , bx1] = box("BleedBox");
+    const pt = 72 / 25.4;
+    expect(tx1! - tx0!).toBeCloseTo(297 * pt, 1);
+    expect(ty1! - ty0!).toBeCloseTo(210 * pt, 1);
+    expect(bx1! - bx0!).toBeCloseTo(303 * pt, 1);
+  });
+});
+
 it("refuses text the bundled face cannot print, with a typed error", async () => {
   await expect(renderSheet({ fluid: "R290", paper: "A4", formats: ["svg"], fields: { title: "冷凍機" }, date: "2025-03-14" })).rejects.toThrow(DomeprintError);
 });
