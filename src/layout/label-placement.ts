@@ -67,7 +67,10 @@ export interface PlacementInput {
 /** Candidate spacing along a line as a share of the type's cap height: fine enough to find gaps, coarse enough to stay fast. */
 const STEP_PER_CAP = 1;
 
-const WEIGHT = { prefer: 4, crowding: 0.6, alignment: 1.2, steep: 0.5 } as const;
+const WEIGHT = { prefer: 4, crowding: 0.6, alignment: 1.2, steep: 0.5, spacing: 0.5 } as const;
+
+/** Labels within this many label heights of a candidate count against it, so labels spread out. */
+const SPACING_HEIGHTS = 3;
 
 interface Scored {
   candidate: Candidate;
@@ -113,8 +116,11 @@ export class LabelPlacer {
     return WEIGHT.prefer * request.prefer(c.x, c.y) + WEIGHT.alignment * Math.min(alignment * 4, 1) + WEIGHT.steep * steep;
   }
 
+  /** Lines crossing the spot, and labels already near it: both make a label harder to find and read. */
   private crowding(c: Candidate, request: LabelRequest): number {
-    return WEIGHT.crowding * Math.min(this.input.lines.segmentOwners(c.box, request.owner).size, 6);
+    const lines = Math.min(this.input.lines.segmentOwners(c.box, request.owner).size, 6);
+    const near = Math.min(this.boxes.countBoxes(grow(c.box, SPACING_HEIGHTS * c.box.hh * 2)), 4);
+    return WEIGHT.crowding * lines + WEIGHT.spacing * near;
   }
 
   /**

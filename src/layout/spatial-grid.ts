@@ -91,4 +91,14 @@ export class SpatialGrid {
     });
     return hit;
   }
+
+  /** How many stored boxes (each counted once) intersect this one. */
+  countBoxes(box: Box): number {
+    const seen = new Set<Box>();
+    this.visit(box, (b) => {
+      for (const p of b.boxes) if (!seen.has(p.box) && boxesIntersect(p.box, box)) seen.add(p.box);
+      return false;
+    });
+    return seen.size;
+  }
 }
