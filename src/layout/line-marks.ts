@@ -113,7 +113,7 @@ export function lineLayers(drawn: DrawnLine[], strokes: Record<Family, Stroke>):
 
 export type Preference = (family: Family, line: Line) => (x: number, y: number) => number;
 
-/** How many labels a line deserves: one, and one more for each stretch as long as a third of the frame. */
+/** How many labels a line deserves: one, and one more for each stretch of 0.6 times the frame's longer side. */
 function wanted(pieces: number[][], frame: Rect, perLine: number): number {
   const length = pieces.reduce((sum, p) => sum + polylineLength(p), 0);
   return Math.max(1, Math.min(perLine, Math.floor(length / (0.6 * Math.max(frame.width, frame.height))) + 1));

@@ -1,4 +1,5 @@
-// Small constructors for scene marks, so layout code reads as what it draws rather than object literals.
+// Small constructors for scene marks (segments, rectangles, text), so layout code reads as what it draws
+// rather than as object literals.
 
 import type { Colour, Fill, PathMark, RectMark, Stroke, TextMark } from "./scene.js";
 
