@@ -22,6 +22,13 @@ export interface PlanOptions {
   table?: boolean;
   /** Height of the band under the plot that holds overlay tables (readings, cycle states), in mm; 0 for none. */
   overlayBand?: number;
+  /** Share of the inner page the panels take: the column's width (landscape) or the band's height (portrait). */
+  panelShare?: number;
+}
+
+/** The panels' usual share of the page; small paper may need more (see PANEL_SHARES). */
+export function defaultPanelShare(landscape: boolean, table: boolean): number {
+  return landscape ? 0.27 : table ? 0.37 : 0.3;
 }
 
 export interface AxisMetrics {
@@ -91,12 +98,13 @@ export function planPage(options: PlanOptions): PagePlan {
   let panels: Rect;
   let plotOuter: Rect;
   if (landscape) {
-    const width = Math.min(Math.max(inner.width * 0.27, options.panelMinWidth ?? 0), inner.width * 0.45);
+    const share = options.panelShare ?? defaultPanelShare(true, Boolean(options.table));
+    const width = Math.min(Math.max(inner.width * share, options.panelMinWidth ?? 0), inner.width * 0.45);
     panels = { x: inner.x + inner.width - width, y: inner.y, width, height: inner.height };
     plotOuter = { x: inner.x, y: inner.y, width: inner.width - width - gap, height: inner.height };
   } else {
     // Three columns of panels under the plot; a table needs about a fifth more height than the text panels.
-    const height = inner.height * (options.table ? 0.37 : 0.3);
+    const height = inner.height * (options.panelShare ?? defaultPanelShare(false, Boolean(options.table)));
     panels = { x: inner.x, y: inner.y + inner.height - height, width: inner.width, height };
     plotOuter = { x: inner.x, y: inner.y, width: inner.width, height: inner.height - height - gap };
   }

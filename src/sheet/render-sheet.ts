@@ -7,7 +7,7 @@ import { lineSetToJson } from "../isolines/index.js";
 import type { SheetContent } from "../layout/content.js";
 import { displayUnits } from "../layout/display-units.js";
 import { resolvePaper } from "../layout/paper.js";
-import { planPage } from "../layout/plan.js";
+import { defaultPanelShare, planPage } from "../layout/plan.js";
 import type { Scene } from "../layout/scene.js";
 import { layoutSheet, overlayBandHeight, panelMinWidth, type SheetReport } from "../layout/sheet-layout.js";
 import type { Style } from "../layout/style.js";
@@ -17,6 +17,7 @@ import { renderSvg } from "../render/svg.js";
 import { atmosphereAt } from "../units/index.js";
 import { defaultReference, engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
 import { getFluid } from "../eos/index.js";
+import { DomeprintError } from "../errors.js";
 import { readingsFileOverlay } from "./overlays.js";
 import { checkSheetOptions, type CheckedSheetOptions, type Format, type SheetOptions } from "./options.js";
 
@@ -72,40 +73,63 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
   const units = displayUnits(o.units, o.pressure);
   const orientation = o.orientation ?? style.defaults.orientation;
   const paper = resolvePaper(o.paper ?? style.defaults.paper, orientation);
-  const table = o.saturationTable ?? style.defaults.saturationTable;
+  const wantsTable = o.saturationTable ?? style.defaults.saturationTable;
   const fluid = getFluid(o.fluid);
   const glide = hasGlide(fluid);
+  // Beside a landscape plot the table may take at most two fifths of the sheet; on smaller paper it is left out.
+  const tableWidth = wantsTable ? panelMinWidth(style, paper, glide) : 0;
+  const table = wantsTable && (paper.width < paper.height || tableWidth <= 0.4 * paper.width);
   const reference = o.reference ?? defaultReference(fluid);
   const overlays = [...o.overlays, ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, reference, o.units, o.altitude))];
-  const plan = planPage({
-    page: paper,
-    style,
-    gauge: o.gauge,
-    glide,
-    ...(table ? { panelMinWidth: panelMinWidth(style, paper, glide), table } : {}),
-    ...(o.margin !== undefined ? { margin: o.margin } : {}),
-    overlayBand: overlayBandHeight(style, paper, overlays, o.margin),
-  });
-  const data = engineData(fluid, reference, units, plan.plot, o.lineOptions);
-  const identity = fluidIdentity(data.fluid, data.reference);
   const atmosphere = atmosphereAt(o.altitude);
-  // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
-  const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, overlays }, paper, reference: data.reference });
-  const content: SheetContent = {
-    fluid: identity,
-    lines: data.lines,
-    saturationScale: saturationTicks(data.fluid, data.lines, units),
-    ...(table ? { saturationTable: saturationRows(data.fluid, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
-    overlays,
-    ...(o.gauge ? { gauge: { altitude: o.altitude, atmosphere } } : {}),
-    units,
-    fields: o.fields,
-    stamp: { date: o.date, version: VERSION, hash },
-    ...(o.lineOptions.densities && Object.keys(o.lineOptions.densities).length > 0 ? { spacingGiven: true } : {}),
+  const landscape = paper.width >= paper.height;
+  // The panels' usual share first; small paper gets a wider column (or taller band) and is traced again.
+  const shares = [defaultPanelShare(landscape, table), ...(landscape ? [0.34, 0.42] : [0.45, 0.55])];
+  const attempt = (panelShare: number) => {
+    const plan = planPage({
+      page: paper,
+      style,
+      gauge: o.gauge,
+      glide,
+      panelShare,
+      ...(table ? { panelMinWidth: tableWidth, table } : {}),
+      ...(o.margin !== undefined ? { margin: o.margin } : {}),
+      overlayBand: overlayBandHeight(style, paper, overlays, o.margin),
+    });
+    const data = engineData(fluid, reference, units, plan.plot, o.lineOptions);
+    const identity = fluidIdentity(data.fluid, data.reference);
+    // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
+    const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, overlays }, paper, reference: data.reference });
+    const content: SheetContent = {
+      fluid: identity,
+      lines: data.lines,
+      saturationScale: saturationTicks(data.fluid, data.lines, units),
+      ...(table ? { saturationTable: saturationRows(data.fluid, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
+      overlays,
+      ...(o.gauge ? { gauge: { altitude: o.altitude, atmosphere } } : {}),
+      units,
+      fields: o.fields,
+      stamp: { date: o.date, version: VERSION, hash },
+      ...(o.lineOptions.densities && Object.keys(o.lineOptions.densities).length > 0 ? { spacingGiven: true } : {}),
+    };
+    return { content, laid: layoutSheet(plan, content, style) };
   };
-  const laid = layoutSheet(plan, content, style);
+  let result: ReturnType<typeof attempt> | undefined;
+  for (const [i, share] of shares.entries()) {
+    try {
+      result = attempt(share);
+      break;
+    } catch (e) {
+      const noRoom = e instanceof DomeprintError && e.code === "E_UNSUPPORTED" && e.details.input === "paper";
+      if (!noRoom || i === shares.length - 1) throw e;
+    }
+  }
+  const { content, laid } = result!;
+  const identity = content.fluid;
   const scene: Scene = { ...laid.scene, bleed: o.bleed, cropMarks: o.cropMarks };
-  return { scene, report: laid.report, content, options: o, name: fileStem(identity.designation, paper.name, orientation) };
+  const omitted = wantsTable && !table ? ["saturation table (too wide for this paper)"] : [];
+  const report = { ...laid.report, omitted: [...omitted, ...laid.report.omitted] };
+  return { scene, report, content, options: o, name: fileStem(identity.designation, paper.name, orientation) };
 }
 
 export async function renderSheet(options: SheetOptions): Promise<RenderedSheet> {
