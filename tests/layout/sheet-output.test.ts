@@ -6,6 +6,7 @@ import { describe, expect, it } from "vitest";
 import { getFluid, saturationT } from "../../src/eos/index.js";
 import { DomeprintError } from "../../src/errors.js";
 import { renderSheet } from "../../src/sheet/index.js";
+import type { TextMark } from "../../src/layout/scene.js";
 import { hasTool, popplerText } from "../render/tools.js";
 
 const TITLE = `Plant <3> & "Kältezentrale" — Ωμέγα / Холод`;
@@ -69,6 +70,18 @@ describe("R-134a sheet, A4 landscape, as SVG", async () => {
     // IIR reference state: the saturated liquid at 0 °C has h = 200 kJ/kg by definition (IIR convention, common practice).
     const hs = flat.map(([h]) => h);
     expect(Math.min(...hs) / 1000).toBeCloseTo(200, 0);
+  });
+
+  it("sets the gauge scale's zero at the standard atmosphere of 300 m and the 0 °C mark at its saturation pressure", () => {
+    const axes = sheet.scene.layers.find((l) => l.id === "axes")!.marks;
+    const zeros = axes.filter((m): m is TextMark => m.kind === "text" && m.text === "0");
+    const left = zeros.filter((m) => m.x < meta.plotFrame.x);
+    const right = zeros.filter((m) => m.x > meta.plotFrame.x + meta.plotFrame.width);
+    expect(left.length).toBe(1);
+    expect(right.length).toBe(1);
+    // ISO 2533 standard atmosphere at 300 m: 97.77 kPa (from memory); the label sits at its tick's height.
+    expect(invert(meta.axes.y, left[0]!.y) / 97770).toBeCloseTo(1, 3);
+    expect(invert(meta.axes.y, right[0]!.y) / saturationT(getFluid("R134a"), 273.15).pL).toBeCloseTo(1, 4);
   });
 
   it("keeps the user's text, markup characters and all, as real text", () => {
