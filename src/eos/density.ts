@@ -23,10 +23,11 @@ export function liquidFloor(f: Fluid, T: number): number {
 
 /**
  * Molar density [mol/m³] at T [K], p [Pa] on the given branch, starting from `guess` (mol/m³, optional).
- * `cap` bounds the vapour branch from above (e.g. the saturated vapour density), when known.
+ * `cap` bounds the vapour branch from above (e.g. the saturated vapour density), `least` the liquid branch
+ * from below (e.g. the saturated liquid density when p ≥ p_sat), when the caller knows them.
  */
-export function densityTP(f: Fluid, T: number, p: number, branch: Branch, guess?: number, cap?: number): number {
-  return branch === "vapour" ? vapourRoot(f, T, p, guess, cap) : denseRoot(f, T, p, branch, guess);
+export function densityTP(f: Fluid, T: number, p: number, branch: Branch, guess?: number, cap?: number, least?: number): number {
+  return branch === "vapour" ? vapourRoot(f, T, p, guess, cap) : denseRoot(f, T, p, branch, guess, least);
 }
 
 /**
@@ -63,11 +64,11 @@ function vapourRoot(f: Fluid, T: number, p: number, guess?: number, cap?: number
  * until p is bracketed between two stable points, then Newton inside the bracket. An isotherm that turns
  * over before reaching p (the equation's polynomial terms at extreme density) is a range error, not a root.
  */
-function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: number): number {
+function denseRoot(f: Fluid, T: number, p: number, branch: Branch, guess?: number, least?: number): number {
   const out = f.tmp2;
   // Below T_c the liquid root lies above the saturated liquid density; starting there keeps the search
   // out of the dome, where an isotherm can have stable islands with roots that are not the liquid.
-  const floor = branch === "liquid" ? liquidFloor(f, T) : 0;
+  const floor = least !== undefined && least > 0 ? least : branch === "liquid" ? liquidFloor(f, T) : 0;
   let rho = guess !== undefined && guess > 0 ? Math.max(guess, floor)
     : floor > 0 ? floor : Math.min(p / (f.R * T), f.data.triple.rhoLiquid);
   if (!(rho > 0) || !Number.isFinite(rho)) rho = f.rhoc;

@@ -5,7 +5,7 @@ import { densityTP, liquidFloor, type Branch } from "./density.js";
 import type { Fluid } from "./fluid.js";
 import { CP, CV, DPDRHO, DPDT, H, P, propertiesTRho, S } from "./properties.js";
 import { checkReferenceName, referenceOffset, type ReferenceName, type ReferenceOffset } from "./reference.js";
-import { saturationP, saturationPressureRange, saturationT, type Saturation } from "./saturation.js";
+import { nearCriticalTieLine, tieLineAtP, saturationP, saturationPressureRange, saturationT, type Saturation } from "./saturation.js";
 import { singlePhase, singleState, tieLine, twoPhaseState, type State } from "./state.js";
 
 export type InputName = "T" | "p" | "rho" | "v" | "h" | "s" | "x";
@@ -47,6 +47,17 @@ function twoPhasePmax(f: Fluid): number {
 
 // ---------------------------------------------------------------- single-phase solves at fixed p
 
+/**
+ * A lower bound of the liquid root at T on an isobar whose saturated liquid is `sat`: colder liquid is denser
+ * (water below 4 °C by less than 1e-3, hence the margin). Well below the saturation temperature the dome at T
+ * is wide and may hold stable islands, so the ancillary floor at T is added there; close to it (and near T_c,
+ * where ancillaries drift) it is left out.
+ */
+function liquidLeast(f: Fluid, T: number, sat: Saturation): number {
+  const base = sat.rhoL * (1 - 1e-3);
+  return T < sat.TL - 2 ? Math.max(base, liquidFloor(f, T)) : base;
+}
+
 type Target = "h" | "s";
 
 /**
@@ -54,14 +65,14 @@ type Target = "h" | "s";
  * `branchAt` picks the density root for each trial temperature; `capRho` bounds the vapour root.
  */
 function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: number, Thi: number, T0: number,
-  branchAt: (T: number) => Branch, rho0?: number, capRho?: number, atLow: "triple" | "boundary" = "boundary"): { T: number; rho: number } {
+  branchAt: (T: number) => Branch, rho0?: number, capRho?: number, atLow: "triple" | "boundary" = "boundary", leastAt?: (T: number) => number): { T: number; rho: number } {
   const o = f.tmp;
   let lo = Tlo, hi = Thi;
   let T = Math.min(Math.max(T0, lo), hi);
   let rho = rho0;
   for (let k = 0; k < MAX_ITER; k++) {
     const br = branchAt(T);
-    rho = densityTP(f, T, p, br, rho, br === "vapour" ? capRho : undefined);
+    rho = densityTP(f, T, p, br, rho, br === "vapour" ? capRho : undefined, br === "liquid" ? leastAt?.(T) : undefined);
     propertiesTRho(f.model, f.M, T, rho, o);
     const F = (which === "h" ? o[H]! : o[S]!) - target;
     const slope = which === "h" ? o[CP]! : o[CP]! / T;
@@ -70,6 +81,9 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
     if (F > 0) hi = T; else lo = T;
     let next = T - F / slope;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    // A tiny Newton step is convergence only where F is small too: near the critical point c_p is huge and
+    // F / c_p can be tiny while h is still far off. Then bisect.
+    if (Math.abs(next - T) <= 1e-13 * T && Math.abs(F) > 1e-9 * scale && hi - lo > 1e-12 * T) next = 0.5 * (lo + hi);
     if (Math.abs(next - T) <= 1e-13 * T) {
       // The bracket has closed on an end of the range: the target lies outside it.
       const outside = Math.abs(F) > 1e-10 * scale;
@@ -78,7 +92,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
         throw rangeError(which, target, `${which} at p = ${p} Pa between its values at ${Tlo} K and ${Thi} K for ${f.id}`, code);
       }
       if (Thi - T <= 1e-9 * T && F < 0 && outside) throw rangeError(which, target, `${which} at p = ${p} Pa up to its value at T_max = ${Thi} K for ${f.id}`);
-      return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined) };
+      return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined, br === "liquid" ? leastAt?.(next) : undefined) };
     }
     T = next;
   }
@@ -91,7 +105,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
  * with ρ in [rhoMin, rhoMax]; otherwise undefined, and the caller uses the bracketed nested solver.
  */
 function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: number, rho0: number,
-  Tlo: number, Thi: number, rhoMin: number, rhoMax: number, liquid = false): { T: number; rho: number } | undefined {
+  Tlo: number, Thi: number, rhoMin: number, rhoMax: number, leastAt?: (T: number) => number): { T: number; rho: number } | undefined {
   const o = f.tmp, M = f.M;
   let T = Math.min(Math.max(T0, Tlo), Thi), rho = rho0;
   for (let k = 0; k < 25; k++) {
@@ -103,7 +117,7 @@ function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: numbe
     const F2 = y - target;
     const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
     if (Math.abs(F1) <= 1e-12 * p && Math.abs(F2) <= 1e-13 * scale) {
-      const ok = T >= Tlo - 1e-9 * T && T <= Thi + 1e-9 * T && rho >= rhoMin && rho <= rhoMax && (!liquid || rho >= liquidFloor(f, T));
+      const ok = T >= Tlo - 1e-9 * T && T <= Thi + 1e-9 * T && rho >= rhoMin && rho <= rhoMax && (!leastAt || rho >= leastAt(T));
       return ok ? { T, rho } : undefined;
     }
     // Jacobian in (T, ln ρ), ρ molar; h and s per unit mass.
@@ -130,16 +144,33 @@ function branchAbove(f: Fluid) {
 }
 
 function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: ReferenceName, off: ReferenceOffset): State {
+  const st = flashPTargetUnchecked(f, p, which, value, ref, off);
+  // Guard: a state whose h (or s) misses the request is a solver failure, never a result.
+  const got = which === "h" ? st.h : st.s;
+  const scale = which === "h" ? Math.abs(value) + 1e3 * Math.abs(st.T) : Math.abs(value) + 1e3;
+  if (!(Math.abs(got - value) <= 1e-8 * scale)) throw convergenceError(`the (p, ${which}) flash`, `p = ${p} Pa, ${which} = ${value} of ${f.id} (reached ${got})`);
+  return st;
+}
+
+function flashPTargetUnchecked(f: Fluid, p: number, which: Target, value: number, ref: ReferenceName, off: ReferenceOffset): State {
   checkP(f, p);
   requireNumber(which, value, { allowNegative: true });
   const target = value - (which === "h" ? off.dh : off.ds);
   const pLowest = saturationPressureRange(f)[0];
   if (p < pLowest) return lowPressureVapour(f, p, which, value, target, ref, off);
-  if (p < twoPhasePmax(f)) {
-    const sat = saturationP(f, p);
+  // Pure fluids: a pressure a hair above the top of the solved range is taken as its top.
+  const top = twoPhasePmax(f);
+  const tie = f.pseudoPure ? (p < top ? tieLineAtP(f, p) : undefined)
+    : p <= top * (1 + 1e-9) ? tieLineAtP(f, Math.min(p, top)) : nearCriticalTieLine(f, p);
+  if (tie) {
+    const sat = tie;
     const t = tieLine(f, sat);
     const yL = which === "h" ? t.hL : t.sL, yV = which === "h" ? t.hV : t.sV;
     if (target >= yL && target <= yV) return twoPhaseState(f, sat, (target - yL) / (yV - yL), ref, off);
+    // Within rounding of a saturated end (near T_c a kelvin's billionth moves h visibly) the state is that end.
+    const snap = 1e-9 * (Math.abs(target) + Math.abs(yV - yL));
+    if (Math.abs(yL - target) <= snap) return twoPhaseState(f, sat, 0, ref, off);
+    if (Math.abs(target - yV) <= snap) return twoPhaseState(f, sat, 1, ref, off);
     const o = f.tmp;
     if (target > yV) {
       propertiesTRho(f.model, f.M, sat.TV, sat.rhoV, o);
@@ -154,13 +185,14 @@ function flashPTarget(f: Fluid, p: number, which: Target, value: number, ref: Re
     propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
     const cp = o[CP]!;
     const T0 = sat.TL - (which === "h" ? (yL - target) / cp : sat.TL * (1 - Math.exp((target - yL) / cp)));
-    const r = newtonAtP(f, p, which, target, Math.max(T0, f.Tmin), sat.rhoL, f.Tmin, sat.TL, sat.rhoL * (1 - 1e-9), Infinity, true)
-      ?? solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple");
+    const least = (T: number) => liquidLeast(f, T, sat);
+    const r = newtonAtP(f, p, which, target, Math.max(T0, f.Tmin), sat.rhoL, f.Tmin, sat.TL, 0, Infinity, least)
+      ?? solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple", least);
     return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
   }
   // Above every saturation pressure there is one stable root at each T; start from the critical isotherm.
   const rc = densityTP(f, Math.min(f.Tc, f.Tmax), p, "single");
-  const r = newtonAtP(f, p, which, target, f.Tc, rc, f.Tmin, f.Tmax, 0, Infinity, true)
+  const r = newtonAtP(f, p, which, target, f.Tc, rc, f.Tmin, f.Tmax, 0, Infinity, (T) => (T < f.Tc - 2 ? liquidFloor(f, T) : 0))
     ?? solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
   return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
 }
@@ -195,7 +227,8 @@ function pseudoQuality(sat: Saturation, T: number): number {
  * bisection in p between the dew and bubble pressures at T.
  */
 function pseudoTwoPhaseAtT(f: Fluid, T: number, measure: (s: State) => number, target: number, ref: ReferenceName, off: ReferenceOffset): State {
-  let lo = f.pDew!.value(T), hi = f.pBubble!.value(T);
+  // Some blends' bubble ancillary passes p_c just below T_c; the tie lines end below p_c.
+  let lo = f.pDew!.value(T), hi = Math.min(f.pBubble!.value(T), f.pc * (1 - 1e-9));
   const at = (p: number) => { const sat = saturationP(f, p); return twoPhaseState(f, sat, pseudoQuality(sat, T), ref, off); };
   const mLo = measure(at(lo)), mHi = measure(at(hi));
   const increasing = mHi > mLo;
@@ -217,18 +250,21 @@ export function flashTP(f: Fluid, T: number, p: number, ref: ReferenceName = "na
   if (T < f.Tc && p < f.pc && hasTwoPhaseAtT(f, T)) {
     if (f.pseudoPure) {
       const pb = f.pBubble!.value(T), pd = f.pDew!.value(T);
-      if (p >= pb) return singleState(f, T, densityTP(f, T, p, "liquid"), "liquid", ref, off);
+      if (p >= pb) return singleState(f, T, densityTP(f, T, p, "liquid", undefined, undefined, Math.max(liquidFloor(f, T), f.rhoc)), "liquid", ref, off);
       if (p <= pd) return singleState(f, T, densityTP(f, T, p, "vapour"), "vapour", ref, off);
       const sat = saturationP(f, p);
       return twoPhaseState(f, sat, pseudoQuality(sat, T), ref, off);
     }
     const sat = saturationT(f, T);
     // At exactly the saturation pressure the state is reported as saturated liquid.
-    if (p >= sat.pL) return singleState(f, T, densityTP(f, T, p, "liquid", sat.rhoL), "liquid", ref, off);
+    if (p >= sat.pL) return singleState(f, T, densityTP(f, T, p, "liquid", sat.rhoL, undefined, sat.rhoL * (1 - 1e-12)), "liquid", ref, off);
     return singleState(f, T, densityTP(f, T, p, "vapour", undefined, sat.rhoV), "vapour", ref, off);
   }
-  const br: Branch = T < f.Tc ? "liquid" : "single";
-  return singleState(f, T, densityTP(f, T, p, br), singlePhase(f, T, p, true), ref, off);
+  // No two-phase region at T: above T_c one root; in the sliver between the last tie line and T_c
+  // (a millikelvin for pure fluids, more for some blends) the branch follows the pressure.
+  if (T >= f.Tc) return singleState(f, T, densityTP(f, T, p, "single"), singlePhase(f, T, p, true), ref, off);
+  const dense = p >= twoPhasePmax(f);
+  return singleState(f, T, densityTP(f, T, p, dense ? "liquid" : "vapour"), singlePhase(f, T, p, dense), ref, off);
 }
 
 export function flashPH(f: Fluid, p: number, h: number, ref: ReferenceName = "native"): State {
@@ -242,7 +278,7 @@ export function flashPS(f: Fluid, p: number, s: number, ref: ReferenceName = "na
 export function flashPX(f: Fluid, p: number, x: number, ref: ReferenceName = "native"): State {
   checkP(f, p);
   checkX(x);
-  if (p >= twoPhasePmax(f)) throw rangeError("p", p, `below ${twoPhasePmax(f)} Pa (the two-phase region) for a quality of ${f.id}`);
+  if (p > twoPhasePmax(f)) throw rangeError("p", p, `up to ${twoPhasePmax(f)} Pa (the two-phase region) for a quality of ${f.id}`);
   return twoPhaseState(f, saturationP(f, p), x, ref, referenceOffset(f, ref));
 }
 

@@ -38,6 +38,8 @@ export class Fluid {
   /** Saturation pressures at Tmin and satTmax [Pa], computed at first use. */
   satPmin: number | undefined;
   satPmax: number | undefined;
+  /** The equation's critical pressure [Pa], computed at first use. */
+  pcEquation: number | undefined;
   /** Scratch vectors for solvers (never returned to callers). */
   readonly tmp = new Float64Array(PROP_SLOTS);
   readonly tmp2 = new Float64Array(PROP_SLOTS);

@@ -99,17 +99,52 @@ function pureSaturationT(f: Fluid, T: number, guessL?: number, guessV?: number):
   throw convergenceError("saturation", `T = ${T} K of ${f.id}`);
 }
 
+/**
+ * A pseudo-pure blend's tie line from its bubble (TL, pL) and dew (TV, pV) ends: the equation's liquid root,
+ * searched above the critical density, and its vapour root. Close to p_c a pseudo-pure equation can lack a
+ * liquid root at the ancillary's bubble pressure; that is a range error, not a vapour-like "liquid".
+ */
+function blendTieLine(f: Fluid, TL: number, TV: number, pL: number, pV: number): Saturation {
+  const rhoL = densityTP(f, TL, pL, "liquid", Math.max(f.rhoLiquid.value(TL), f.rhoc), undefined, f.rhoc);
+  const rhoV = densityTP(f, TV, pV, "vapour");
+  if (!(rhoL > f.rhoc && rhoL > rhoV * (1 + 1e-6)))
+    throw rangeError("p", pL, `pressures where the pseudo-pure equation of ${f.id} has a liquid root at the bubble point (it has none this close to p_c = ${f.pc} Pa)`);
+  return { TL, TV, pL, pV, rhoL, rhoV };
+}
+
 /** Saturation at temperature T [K]. */
 export function saturationT(f: Fluid, T: number): Saturation {
   checkT(f, T);
   if (f.pseudoPure) {
     const pL = f.pBubble!.value(T), pV = f.pDew!.value(T);
-    const rhoL = densityTP(f, T, pL, "liquid", f.rhoLiquid.value(T));
-    const rhoV = densityTP(f, T, pV, "vapour");
-    return { TL: T, TV: T, pL, pV, rhoL, rhoV };
+    return blendTieLine(f, T, T, pL, pV);
   }
   if (T > f.satTmax) throw rangeError("T", T, `${f.Tmin} K to ${f.satTmax} K (the saturation solver stops ${+(f.Tc - f.satTmax).toPrecision(3)} K below the critical point) for ${f.id}`);
-  return pureSaturationT(f, T);
+  try {
+    return pureSaturationT(f, T);
+  } catch (e) {
+    if (!(e instanceof DomeprintError) || T < f.TcEquation - NEAR_CRITICAL_BAND) throw e;
+    return nearCriticalContinuation(f, T);
+  }
+}
+
+/**
+ * Fallback within the near-critical band: walk from the anchor 2 K below T_c towards T, halving the distance
+ * to T_c each step and scaling the last solution's densities by the critical law to start the next.
+ */
+function nearCriticalContinuation(f: Fluid, T: number): Saturation {
+  const Tc = f.TcEquation;
+  let Tk = Tc - NEAR_CRITICAL_BAND;
+  let s = pureSaturationT(f, Tk, f.rhoLiquid.value(Tk), f.rhoVapour.value(Tk));
+  for (let k = 0; k < 40 && Tk < T; k++) {
+    const next = Math.min(T, Tc - 0.5 * (Tc - Tk));
+    const scale = Math.pow((Tc - next) / (Tc - Tk), 0.325);
+    const mid = 0.5 * (s.rhoL + s.rhoV), half = 0.5 * (s.rhoL - s.rhoV) * scale;
+    s = pureSaturationT(f, next, mid + half, mid - half);
+    Tk = next;
+  }
+  if (Tk !== T) s = pureSaturationT(f, T, s.rhoL, s.rhoV);
+  return s;
 }
 
 /** Pressure at the lowest saturation temperature and at the highest the solver reaches. */
@@ -169,15 +204,59 @@ function newtonSaturationP(f: Fluid, p: number): Saturation | undefined {
   return undefined;
 }
 
+/** The equation's critical pressure [Pa] (at its own T_c and ρ_c), computed at first use. */
+export function equationCriticalPressure(f: Fluid): number {
+  if (f.pcEquation === undefined) {
+    const m = f.model;
+    m.evalResidual(m.Tr / f.TcEquation, f.rhocEquation / m.rhor);
+    f.pcEquation = f.rhocEquation * m.R * f.TcEquation * (1 + m.r[1]!);
+  }
+  return f.pcEquation;
+}
+
+/**
+ * A tie line for pressures between the top of the solved saturation range (1 mK below T_c) and the
+ * equation's critical pressure, a band of a few hundred pascals: T_sat is interpolated linearly in p
+ * between satTmax and T_c and both roots are taken there. Undefined where the two roots merge.
+ */
+export function nearCriticalTieLine(f: Fluid, p: number): Saturation | undefined {
+  if (f.pseudoPure) return undefined;
+  const [, pTop] = saturationPressureRange(f);
+  const pc = equationCriticalPressure(f);
+  if (!(p > pTop && p < pc)) return undefined;
+  const T = f.satTmax + ((f.TcEquation - f.satTmax) * (p - pTop)) / (pc - pTop);
+  const top = pureSaturationT(f, f.satTmax);
+  try {
+    const rhoL = densityTP(f, T, p, "liquid", top.rhoL, undefined, f.rhocEquation);
+    const rhoV = densityTP(f, T, p, "vapour", top.rhoV, f.rhocEquation);
+    return rhoL > rhoV * (1 + 1e-9) ? { TL: T, TV: T, pL: p, pV: p, rhoL, rhoV } : undefined;
+  } catch (e) {
+    if (e instanceof DomeprintError) return undefined;
+    throw e;
+  }
+}
+
+/**
+ * The tie line at p for flashes: as saturationP, but undefined where a pseudo-pure blend has no liquid root
+ * at its bubble point (a band just below p_c), so that states there are treated as single-phase.
+ */
+export function tieLineAtP(f: Fluid, p: number): Saturation | undefined {
+  if (!f.pseudoPure) return saturationP(f, p);
+  try {
+    return saturationP(f, p);
+  } catch (e) {
+    if (e instanceof DomeprintError && e.code === "E_RANGE" && p > 0.9 * f.pc) return undefined;
+    throw e;
+  }
+}
+
 /** Saturation at pressure p [Pa]: for blends, bubble liquid at T_bubble(p) and dew vapour at T_dew(p). */
 export function saturationP(f: Fluid, p: number): Saturation {
   if (f.pseudoPure) {
     if (p > f.pc) throw rangeError("p", p, `up to ${f.pc} Pa (critical pressure) for the two-phase region of ${f.id}`);
     const TL = f.pBubble!.invert(p), TV = f.pDew!.invert(p);
     if (TL < f.Tmin - 1e-9) throw rangeError("p", p, `from ${f.pBubble!.value(f.Tmin)} Pa (bubble pressure at ${f.Tmin} K) for ${f.id}`, "E_BELOW_TRIPLE");
-    const rhoL = densityTP(f, TL, p, "liquid", f.rhoLiquid.value(TL));
-    const rhoV = densityTP(f, TV, p, "vapour");
-    return { TL, TV, pL: p, pV: p, rhoL, rhoV };
+    return blendTieLine(f, TL, TV, p, p);
   }
   const [pmin, pmaxSat] = saturationPressureRange(f);
   if (p < pmin * (1 - 1e-9)) throw rangeError("p", p, `${pmin} Pa (triple point) to ${pmaxSat} Pa for saturation of ${f.id}`, "E_BELOW_TRIPLE");
