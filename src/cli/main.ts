@@ -5,6 +5,7 @@ import { Command, CommanderError } from "commander";
 import { defaultIo, EXIT_OK, EXIT_USAGE, type Io } from "./io.js";
 import { registerProps } from "./props.js";
 import { registerFluids } from "./fluids.js";
+import { registerBuild } from "./build.js";
 import { registerCycle } from "./cycle.js";
 import { registerSheet } from "./sheet.js";
 
@@ -28,6 +29,7 @@ Examples:
   domeprint props R290 T=0C x=1 --reference iir`);
   registerProps(program, io, setCode);
   registerFluids(program, io, setCode);
+  registerBuild(program, io, setCode);
   registerCycle(program, io, setCode);
   registerSheet(program, io, setCode);
   try {

@@ -16,7 +16,8 @@ export function levelRow(fmt: Formatter, l: ResolvedLevel, pseudoPure: boolean):
     : `saturation ${fmt.withUnit("temperature", l.dew)}`;
   if ("T" in l.given) {
     const T = fmt.withUnit("temperature", l.given.T);
-    return pseudoPure ? `${T} at the ${GLIDE_TEXT[l.glidePoint!]} → ${p} (${sat})` : `${T} → ${p}`;
+    // Written with "at" rather than an arrow: the sheet's typeface has no arrow glyph.
+    return pseudoPure ? `${T} at the ${GLIDE_TEXT[l.glidePoint!]}, at ${p} (${sat})` : `${T} at ${p}`;
   }
   return `${p}, given as a pressure (${sat})`;
 }

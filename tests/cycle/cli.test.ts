@@ -91,7 +91,7 @@ describe("output", () => {
   it("the table states the glide point, the assumptions and the caution", () => {
     const r = cli(["cycle", "R407C", "--evaporating", "0C", "--condensing", "45C", "--efficiency", "0.65", "--capacity", "10kW"]);
     expect(r.code, r.err).toBe(0);
-    expect(r.out).toMatch(/evaporating +0\.0 °C at the dew point → /);
+    expect(r.out).toMatch(/evaporating +0\.0 °C at the dew point, at /);
     expect(r.out).toMatch(/pseudo-pure blend/);
     expect(r.out).toMatch(/suction volume flow +[\d.]+ m³\/h/);
     expect(r.out.trimEnd().split("\n").at(-1)).toMatch(/^Caution: .*documentation.*Local codes and licensed practice prevail\.$/);
