@@ -6,6 +6,7 @@ import { defaultIo, EXIT_OK, EXIT_USAGE, type Io } from "./io.js";
 import { registerProps } from "./props.js";
 import { registerFluids } from "./fluids.js";
 import { registerBuild } from "./build.js";
+import { registerDemo } from "./demo.js";
 import { registerCycle } from "./cycle.js";
 import { registerSheet } from "./sheet.js";
 
@@ -30,6 +31,7 @@ Examples:
   registerProps(program, io, setCode);
   registerFluids(program, io, setCode);
   registerBuild(program, io, setCode);
+  registerDemo(program, io, setCode);
   registerCycle(program, io, setCode);
   registerSheet(program, io, setCode);
   try {
