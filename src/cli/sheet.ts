@@ -36,6 +36,7 @@ interface Flags {
   cropMarks?: boolean;
   margin?: string;
   points?: string[];
+  cycle?: string[];
 }
 
 function orientationOf(text: string | undefined): Orientation | undefined {
@@ -80,6 +81,7 @@ export function sheetOptions(fluid: string, f: Flags): SheetOptions {
     ...(f.saturationTable !== undefined ? { saturationTable: f.saturationTable } : {}),
     ...(f.date !== undefined ? { date: checkDate(f.date) } : {}),
     pointsFiles: f.points ?? [],
+    cycleFiles: f.cycle ?? [],
   };
 }
 
@@ -113,6 +115,7 @@ export function registerSheet(program: Command, io: Io, setCode: (c: number) => 
     .option("--bleed <mm>", "bleed around the trimmed page in mm")
     .option("--crop-marks", "draw crop marks outside the trimmed page")
     .option("--margin <mm>", "sheet margin in mm (default: the style's, scaled to the paper)")
+    .option("--cycle <file>", "design cycle to draw: YAML or JSON with the keys of a spec's cycles entry (repeatable)", collect)
     .option("--points <file>", "readings file to plot as points (repeatable)", collect)
     .option("-o, --output <dir>", "output folder", "out")
     .addHelpText(
@@ -124,7 +127,16 @@ temporary file in the output folder and renamed into place when every file is re
 Examples:
   domeprint sheet R717 --paper A1 --saturation-table --site "Cold store 2" -o charts
   domeprint sheet R744 --paper A3 --orientation landscape --gauge --altitude 300m --format pdf,png --dpi 150
-  domeprint sheet R290 --style training-handout --units ip --pressure psi --date 2025-03-14`,
+  domeprint sheet R290 --style training-handout --units ip --pressure psi --date 2025-03-14
+  domeprint sheet R290 --cycle design.yaml --points readings.csv --style client-report
+
+A cycle file holds one cycle, e.g.
+  name: design
+  evaporating: -10C
+  condensing: 40C
+  superheat: 5K
+  subcooling: 3K
+  efficiency: 0.7`,
     )
     .action(async (fluid: string, flags: Flags) => {
       try {

@@ -20,8 +20,8 @@ export interface PlanOptions {
   margin?: number;
   /** The panels include a saturation table: a portrait band is made taller to hold it. */
   table?: boolean;
-  /** Height of the band under the plot that holds overlay tables (readings, cycle states), in mm; 0 for none. */
-  overlayBand?: number;
+  /** Height (mm) the band under the plot needs for overlay tables (readings, cycle states) at a given width. */
+  overlayBand?: (width: number) => number;
   /** Share of the inner page the panels take: the column's width (landscape) or the band's height (portrait). */
   panelShare?: number;
 }
@@ -109,8 +109,9 @@ export function planPage(options: PlanOptions): PagePlan {
     plotOuter = { x: inner.x, y: inner.y, width: inner.width, height: inner.height - height - gap };
   }
   // Overlay tables are wide (ten columns of readings), so they take a band under the plot, not the panel column.
-  const band = options.overlayBand ? options.overlayBand + gap : 0;
-  const overlayBand = { x: plotOuter.x, y: plotOuter.y + plotOuter.height - (options.overlayBand ?? 0), width: plotOuter.width, height: options.overlayBand ?? 0 };
+  const bandHeight = options.overlayBand ? options.overlayBand(plotOuter.width) : 0;
+  const band = bandHeight > 0 ? bandHeight + gap : 0;
+  const overlayBand = { x: plotOuter.x, y: plotOuter.y + plotOuter.height - bandHeight, width: plotOuter.width, height: bandHeight };
   const plot = { x: plotOuter.x + left, y: plotOuter.y + top, width: plotOuter.width - left - right, height: plotOuter.height - top - bottom - band };
   const rules = {
     pressure: plot.x,

@@ -173,34 +173,63 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
   };
 }
 
-/** Overlay tables side by side in the band under the plot, each as wide as its share of the band. */
-function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): PlacedPanel[] {
-  if (panels.length === 0) return [];
-  const band = plan.overlayBand;
-  // Tables share the band as columns of a table do: the widest give way first.
+interface OverlayRow {
+  panels: Panel[];
+  widths: number[];
+  height: number;
+}
+
+/** No overlay table claims more than half the band, so a table with one long note shares its row. */
+const MAX_TABLE_SHARE = 0.5;
+/** Tables in one row may be squeezed to this share of their natural widths before a new row starts. */
+const SQUEEZE = 0.8;
+
+/**
+ * Overlay tables in rows across the band: as many side by side as fit (squeezed a little if need be),
+ * the rest on further rows; within a row the widest give way first, long cells ending in an ellipsis.
+ */
+function overlayRows(panels: Panel[], style: PanelStyle, width: number, gap: number): OverlayRow[] {
   const natural = panels.map((p) => {
     const item = p.items.find((i) => i.kind === "table");
-    return item && item.kind === "table" ? tableWidth(item, style) : 1;
+    return Math.min(item && item.kind === "table" ? tableWidth(item, style) : width, width * MAX_TABLE_SHARE);
   });
-  const widths = fitColumns(natural, band.width - plan.gap * (panels.length - 1));
-  let x = band.x;
-  return panels.map((panel, i) => {
-    const width = widths[i]!;
-    const rect = { x, y: band.y, width, height: band.height };
-    x += width + plan.gap;
-    return { panel, rect };
+  const rows: { panels: Panel[]; natural: number[] }[] = [];
+  panels.forEach((panel, i) => {
+    const row = rows[rows.length - 1];
+    const used = row ? row.natural.reduce((a, b) => a + b + gap, 0) : Infinity;
+    if (row && SQUEEZE * (used + natural[i]!) <= width) {
+      row.panels.push(panel);
+      row.natural.push(natural[i]!);
+    } else rows.push({ panels: [panel], natural: [natural[i]!] });
+  });
+  return rows.map((row) => {
+    const widths = fitColumns(row.natural, width - gap * (row.panels.length - 1));
+    return { panels: row.panels, widths, height: Math.max(...row.panels.map((p, i) => panelHeight(p, style, widths[i]!))) };
   });
 }
 
-/** Height the overlay tables need in the band under the plot, at the style's panel type on this paper. */
-export function overlayBandHeight(style: Style, page: { width: number; height: number }, overlays: Overlay[], margin?: number): number {
+function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): PlacedPanel[] {
+  const band = plan.overlayBand;
+  const placed: PlacedPanel[] = [];
+  let y = band.y;
+  for (const row of overlayRows(panels, style, band.width, plan.gap)) {
+    let x = band.x;
+    row.panels.forEach((panel, i) => {
+      placed.push({ panel, rect: { x, y, width: row.widths[i]!, height: row.height } });
+      x += row.widths[i]! + plan.gap;
+    });
+    y += row.height + plan.gap;
+  }
+  return placed;
+}
+
+/** The height overlay tables need in a band of the given width, at the style's panel type on this paper. */
+export function overlayBandHeight(style: Style, page: { width: number; height: number }, overlays: Overlay[]): (width: number) => number {
   const panels = overlayPanels(overlays);
-  if (panels.length === 0) return 0;
   const sizes = sizesFor(style, page);
   const pStyle = panelStyle(style, sizes);
-  const inner = page.width - 2 * (margin ?? sizes.mm(style.page.margin));
-  const width = (inner - sizes.mm(style.page.gap) * (panels.length - 1)) / panels.length;
-  return Math.max(...panels.map((p) => panelHeight(p, pStyle, width)));
+  const gap = sizes.mm(style.page.gap);
+  return (width) => (panels.length === 0 ? 0 : overlayRows(panels, pStyle, width, gap).reduce((sum, row, i) => sum + row.height + (i > 0 ? gap : 0), 0));
 }
 
 /** Width the panels need for a saturation table at the smallest type the arrangement may use. */

@@ -49,6 +49,8 @@ export interface SheetOptions {
   overlays?: Overlay[];
   /** Readings files to evaluate against the fluid in the sheet's reference state and draw as points. */
   pointsFiles?: string[];
+  /** Cycle files (one design cycle each, YAML or JSON) to evaluate in the sheet's reference state and draw. */
+  cycleFiles?: string[];
   /** Window and line choices for the isoline generator; given spacings are drawn as asked, never thinned. */
   lineOptions?: SheetLineOptions;
 }
@@ -81,6 +83,8 @@ export interface CheckedSheetOptions {
   pressure?: PressureUnitName;
   gauge: boolean;
   altitude: number;
+  /** True when the caller gave the altitude (readings files may state their own). */
+  altitudeGiven: boolean;
   reference?: ReferenceName;
   formats: Format[];
   dpi: number;
@@ -93,6 +97,7 @@ export interface CheckedSheetOptions {
   date: string;
   overlays: Overlay[];
   pointsFiles: string[];
+  cycleFiles: string[];
   lineOptions: SheetLineOptions;
 }
 
@@ -125,6 +130,7 @@ export function checkSheetOptions(o: SheetOptions): CheckedSheetOptions {
     ...(o.pressure !== undefined ? { pressure: checkPressureUnit(o.pressure) } : {}),
     gauge: o.gauge ?? o.altitude !== undefined,
     altitude: o.altitude ?? 0,
+    altitudeGiven: o.altitude !== undefined,
     ...(o.reference !== undefined ? { reference: checkReferenceName(o.reference) } : {}),
     formats: checkFormats(o.formats ?? ["pdf", "svg"]),
     dpi: o.dpi ?? 200,
@@ -137,6 +143,7 @@ export function checkSheetOptions(o: SheetOptions): CheckedSheetOptions {
     date: o.date === undefined ? today() : checkDate(o.date),
     overlays: o.overlays ?? [],
     pointsFiles: o.pointsFiles ?? [],
+    cycleFiles: o.cycleFiles ?? [],
     lineOptions: o.lineOptions ?? {},
   };
 }

@@ -16,8 +16,11 @@ function readText(path: string, option: string): string {
   }
 }
 
-/** Readings from a readings file as a points overlay; the site altitude sets gauge readings' atmosphere. */
-export function readingsFileOverlay(path: string, fluid: string, reference: ReferenceName, units: UnitSystem, altitude: number): Overlay {
-  const file = parseReadings(readText(path, "--points"), { source: path, altitude });
+/**
+ * Readings from a readings file as a points overlay. The site altitude, when given, sets the atmosphere
+ * of gauge readings (the file may state its own, and the parser refuses a contradiction).
+ */
+export function readingsFileOverlay(path: string, fluid: string, reference: ReferenceName, units: UnitSystem, altitude: number | undefined): Overlay {
+  const file = parseReadings(readText(path, "--points"), { source: path, ...(altitude !== undefined ? { altitude } : {}) });
   return readingsOverlay(evaluateReadings(fluid, file, reference), units);
 }

@@ -19,6 +19,7 @@ import { defaultReference, engineData, fluidIdentity, hasGlide, saturationRows, 
 import { getFluid } from "../eos/index.js";
 import { DomeprintError } from "../errors.js";
 import { readingsFileOverlay } from "./overlays.js";
+import { cycleFileOverlay } from "./cycle-file.js";
 import { checkSheetOptions, type CheckedSheetOptions, type Format, type SheetOptions } from "./options.js";
 
 export const VERSION: string = (JSON.parse(readFileSync(new URL("../../package.json", import.meta.url), "utf8")) as { version: string }).version;
@@ -80,8 +81,12 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
   const tableWidth = wantsTable ? panelMinWidth(style, paper, glide) : 0;
   const table = wantsTable && (paper.width < paper.height || tableWidth <= 0.4 * paper.width);
   const reference = o.reference ?? defaultReference(fluid);
-  const overlays = [...o.overlays, ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, reference, o.units, o.altitude))];
   const atmosphere = atmosphereAt(o.altitude);
+  const overlays = [
+    ...o.overlays,
+    ...o.cycleFiles.map((file) => cycleFileOverlay(file, fluid.id, reference, o.units, atmosphere)),
+    ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, reference, o.units, o.altitudeGiven ? o.altitude : undefined)),
+  ];
   const landscape = paper.width >= paper.height;
   // The panels' usual share first; small paper gets a wider column (or taller band) and is traced again.
   const shares = [defaultPanelShare(landscape, table), ...(landscape ? [0.34, 0.42] : [0.45, 0.55])];
@@ -94,12 +99,12 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
       panelShare,
       ...(table ? { panelMinWidth: tableWidth, table } : {}),
       ...(o.margin !== undefined ? { margin: o.margin } : {}),
-      overlayBand: overlayBandHeight(style, paper, overlays, o.margin),
+      overlayBand: overlayBandHeight(style, paper, overlays),
     });
     const data = engineData(fluid, reference, units, plan.plot, o.lineOptions);
     const identity = fluidIdentity(data.fluid, data.reference);
     // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
-    const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, overlays }, paper, reference: data.reference });
+    const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, cycleFiles: undefined, overlays }, paper, reference: data.reference });
     const content: SheetContent = {
       fluid: identity,
       lines: data.lines,
@@ -133,7 +138,11 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
 }
 
 export async function renderSheet(options: SheetOptions): Promise<RenderedSheet> {
-  const sheet = composeSheet(options);
+  return renderComposed(composeSheet(options));
+}
+
+/** Renders a composed sheet to the formats its options ask for (the second half of renderSheet). */
+export async function renderComposed(sheet: ComposedSheet): Promise<RenderedSheet> {
   const { scene, content, options: o } = sheet;
   const out: RenderedSheet = { scene, report: sheet.report, name: sheet.name };
   const wants = (f: Format) => o.formats.includes(f);
