@@ -13,3 +13,7 @@ export { referenceOffset, availableReferences, checkReferenceName, REFERENCE_NAM
 export type { ReferenceName, ReferenceOffset } from "./reference.js";
 export { equationCriticalPoint } from "./critical.js";
 export type { FluidFile } from "./fluid-file.js";
+export { resolveSubstance, substanceId } from "./substance.js";
+export type { Substance } from "./substance.js";
+export { getMixture, blendIds, Mixture, mixtureFlash, mixtureSaturationT, mixtureSaturationP, MIXTURE_PAIRS, mixtureReferenceOffset, traceEnvelope } from "./mixture/index.js";
+export type { EstimatedPair, MixtureInputs, MixtureInputName, MixtureState, PhaseComposition, Envelope, EnvelopePoint } from "./mixture/index.js";
