@@ -103,7 +103,8 @@ function gaugeMarks(scales: ChartScales, unit: Unit, atmosphere: number, plan: P
   for (const g of multiples(-atm + vacuumStep / 10, -vacuumStep / 10, vacuumStep / 10)) add(g, rankBySteps(g, [vacuumStep * 5, vacuumStep, vacuumStep / 2]) + 1);
   const { frame } = scales;
   const inside = candidates.filter((c) => c.at >= frame.y && c.at <= frame.y + frame.height);
-  const labelled = new Set(thinTicks(inside.filter((c) => c.rank <= 2), plan.axis.labelHeight * 1.2).map((c) => c.value));
+  // As dense as the absolute scale beside it allows, the rounder readings first.
+  const labelled = new Set(thinTicks(inside.filter((c) => c.rank <= 3), plan.axis.labelHeight * 1.35).map((c) => c.value));
   return thinTicks(inside, plan.sizes.mm(1.2)).map((c) => ({ value: c.value, y: c.at, labelled: labelled.has(c.value) }));
 }
 
