@@ -10,7 +10,7 @@ import { runCycle } from "../cli/cycle.js";
 import { checkPressureUnit } from "../layout/display-units.js";
 import { resolvePaper } from "../layout/paper.js";
 import { loadStyle } from "../layout/style-file.js";
-import { checkFormats, defaultReference, type SheetLineOptions, type SheetOptions } from "../sheet/index.js";
+import { checkDate, checkFormats, defaultReference, type SheetLineOptions, type SheetOptions } from "../sheet/index.js";
 import { atmosphereAt, parseQuantity, type Quantity } from "../units/index.js";
 import type { LoadedSpec } from "./load.js";
 import { specError } from "./load.js";
@@ -158,6 +158,9 @@ export function planSheets(spec: LoadedSpec): PlannedSheet[] {
     const ref = (e.reference ?? defaultReference(f)) as ReferenceName;
     const formats = e.formats === undefined ? undefined : at(file, `${pre(path)}formats`, () => checkFormats(Array.isArray(e.formats) ? e.formats : e.formats));
     const units = e.units ?? "si";
+    if (e.date !== undefined) at(file, `${pre(path)}date`, () => checkDate(e.date));
+    if (e.dpi !== undefined && !(Number.isFinite(e.dpi) && e.dpi >= 10 && e.dpi <= 2400))
+      throw specError(file, `${pre(path)}dpi`, `${show(e.dpi)}: not a usable resolution`, e.dpi, "10 to 2400 dots per inch");
     const lineOptions = {
       ...(e.window ? { window: windowOf(file, path, e, f, ref, atmosphere) } : {}),
       ...(e.lines ? linesOf(file, path, e) : {}),
