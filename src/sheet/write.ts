@@ -2,7 +2,7 @@
 // first and is renamed into place only when all are written, so a failure never costs a file on disk.
 
 import { randomBytes } from "node:crypto";
-import { mkdirSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, renameSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 
 export interface OutputFile {
@@ -27,6 +27,12 @@ export function writeAtomically(dir: string, files: OutputFile[]): string[] {
   } catch (e) {
     for (const { temp } of staged) rmSync(temp, { force: true });
     throw e;
+  }
+  // A target that cannot be replaced (a folder in its place) would stop the renames half-way: check first.
+  const blocked = staged.find(({ final }) => existsSync(final) && statSync(final).isDirectory());
+  if (blocked) {
+    for (const { temp } of staged) rmSync(temp, { force: true });
+    throw new Error(`cannot write ${blocked.final}: a folder of that name is in the way`);
   }
   for (const { temp, final } of staged) renameSync(temp, final);
   return staged.map((s) => s.final);
