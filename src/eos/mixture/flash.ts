@@ -7,6 +7,7 @@ import { checkReferenceName, type ReferenceName, type ReferenceOffset } from "..
 import type { Phase } from "../state.js";
 import { mixtureDensityTP } from "./density.js";
 import type { Mixture } from "./mixture.js";
+import { newtonAtP } from "./flash-newton.js";
 import { mixturePropertiesTRho } from "./properties.js";
 import { mixtureReferenceOffset } from "./reference.js";
 import { saturationPoint, type SaturationPoint } from "./saturation.js";
@@ -143,6 +144,24 @@ function twoPhaseAtP(mix: Mixture, p: number, bub: SaturationPoint, dew: Saturat
   return st!;
 }
 
+/**
+ * The two-phase (p, h) or (p, s) state by Newton on (ln K, T) together, started where the target falls
+ * linearly between the bubble and dew points; null when it does not converge (the caller then brackets in T).
+ */
+function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, yL: number, yV: number, which: Target, target: number,
+  ref: ReferenceName, off: ReferenceOffset): MixtureState | null {
+  const fT = (target - yL) / (yV - yL);
+  const T0 = bub.T + fT * (dew.T - bub.T);
+  const f = 1 - fT;
+  const lnK = new Float64Array(mix.N);
+  for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
+  const r = newtonAtP(mix, p, which, target * mix.M, {
+    T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T, Thi: dew.T,
+  });
+  if (!r) return null;
+  return mixtureTwoPhaseState(mix, r.T, p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
+}
+
 // ---------------------------------------------------------------- the flashes
 
 function flashTP(mix: Mixture, T: number, p: number, ref: ReferenceName, off: ReferenceOffset): MixtureState {
@@ -186,7 +205,9 @@ function flashPTarget(mix: Mixture, p: number, which: Target, value: number, ref
     }
     if (target === yL) return saturatedState(mix, bub, ref, off);
     if (target === yV) return saturatedState(mix, dew, ref, off);
-    const scale = which === "h" ? Math.abs(yV - yL) + Math.abs(target) : Math.abs(yV - yL) + Math.abs(target);
+    const fast = newtonTwoPhase(mix, p, bub, dew, yL, yV, which, target, ref, off);
+    if (fast) return fast;
+    const scale = Math.abs(yV - yL) + Math.abs(target);
     return twoPhaseAtP(mix, p, bub, dew, yL, yV, (st) => (which === "h" ? st.h : st.s) - (which === "h" ? off.dh : off.ds), target, ref, off, scale, `${which} at fixed pressure (two-phase)`);
   }
   const r = solveSingleAtP(mix, p, which, target, mix.Tmin, mix.Tmax, c.T, above);
