@@ -172,7 +172,11 @@ export class LabelPlacer {
     for (const request of requests) {
       if (first.has(request)) continue;
       const shape = shapes.get(request)!;
-      const chosen = this.best(request, labelCandidates(request.pieces, shape, (STEP_PER_CAP * shape.capHeight) / 2, request.beside ?? 0, 0.7));
+      const step = (STEP_PER_CAP * shape.capHeight) / 2;
+      // Still no room on the line (it runs along the frame, or through a crowd): set the label just beside it.
+      const chosen =
+        this.best(request, labelCandidates(request.pieces, shape, step, request.beside ?? 0, 0.7)) ??
+        (request.beside ? undefined : this.best({ ...request, beside: shape.pad }, labelCandidates(request.pieces, shape, step, shape.pad, 0.7)));
       if (chosen) {
         this.commit(request, chosen.candidate);
         first.set(request, chosen.candidate);
