@@ -83,7 +83,7 @@ export function resolveFluidId(name: string): string {
   const hint = suggestions.length ? `; did you mean ${suggestions.join(", ")}?` : "";
   throw new DomeprintError(
     "E_UNKNOWN_FLUID",
-    `fluid = ${JSON.stringify(name)}: unknown fluid${hint} Allowed: a fluid id, R-number or chemical name (list them with 'domeprint fluids')`,
+    `fluid = ${JSON.stringify(name)}: unknown fluid${hint}; allowed: a fluid id, R-number or chemical name (list them with 'domeprint fluids')`,
     { input: "fluid", value: name, allowed: fluidIds().join(", "), suggestions },
   );
 }
