@@ -223,7 +223,7 @@ export function registerCycle(program: Command, io: Io, setCode: (c: number) => 
   program
     .command("cycle")
     .description("a refrigeration cycle's states and performance, or the states of measured readings")
-    .argument("<fluid>", "fluid id, R-number or chemical name")
+    .argument("<fluid>", "fluid id, R-number, chemical name; single-stage also a blend id (R454B) or composition")
     .option("--evaporating <level>", "evaporating temperature or pressure (e.g. -10C, 2.1bar, 20psig)")
     .option("--condensing <level>", "condensing temperature or pressure (subcritical cycles)")
     .option("--glide-point <point>", "for blends, where a temperature level sits in the glide: dew, bubble, mid", "dew")

@@ -1,6 +1,7 @@
 // Turns the states of a circuit, listed in flow order, into numbered points and drawable legs.
 // A step that repeats its predecessor (a line with no pressure drop) adds its role, not a point.
-import type { Fluid, State } from "../eos/index.js";
+import type { State } from "../eos/index.js";
+import type { WorkingFluid as Fluid } from "./working-fluid.js";
 import { saturationMargins } from "./margins.js";
 import type { Leg, Process } from "./path.js";
 import type { CyclePoint, Role } from "./point.js";

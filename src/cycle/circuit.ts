@@ -1,6 +1,7 @@
 // The single-stage circuit shared by the subcritical and transcritical models: evaporator, optional
 // internal heat exchanger, suction line, compressor, discharge line, condenser or gas cooler, valve.
-import type { Fluid, ReferenceName, State } from "../eos/index.js";
+import type { ReferenceName, State } from "../eos/index.js";
+import type { WorkingFluid as Fluid } from "./working-fluid.js";
 import { chainPoints, makePoint, type ChainStep } from "./chain.js";
 import { compress, type Compressor } from "./compression.js";
 import { internalHeatExchange } from "./ihx.js";

@@ -1,7 +1,8 @@
 // Adiabatic compression from a suction state to a discharge pressure, set either by an isentropic
 // efficiency or by a measured discharge temperature (from which the efficiency follows).
 import { DomeprintError } from "../errors.js";
-import { flashPH, flashPS, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+import type { ReferenceName, State } from "../eos/index.js";
+import { statePH, statePS, stateTP, type WorkingFluid as Fluid } from "./working-fluid.js";
 import { cycleInputError, pressureText, requireEfficiency, temperatureText } from "./check.js";
 
 /** How the compressor is described: an isentropic efficiency in (0, 1], or the discharge temperature [K]. */
@@ -34,14 +35,14 @@ export function compress(f: Fluid, suction: State, pOut: number, c: Compressor, 
   if (!(Number.isFinite(T) && T > isentropic.T)) {
     throw cycleInputError(input, T, temperatureText(T), `not above the isentropic discharge temperature ${temperatureText(isentropic.T)} (that would be an efficiency above 1)`, `above ${temperatureText(isentropic.T)}`);
   }
-  const discharge = flashTP(f, T, pOut, ref);
+  const discharge = stateTP(f, T, pOut, ref);
   return { discharge, isentropic, efficiency: (isentropic.h - suction.h) / (discharge.h - suction.h) };
 }
 
 /** The isentropic end; a steep compression of a hot suction gas can end past the equation's upper temperature. */
 function isentropicEnd(f: Fluid, suction: State, pOut: number, ref: ReferenceName, input: string, c: Compressor): State {
   try {
-    return flashPS(f, pOut, suction.s, ref);
+    return statePS(f, pOut, suction.s, ref);
   } catch (e) {
     if (!(e instanceof DomeprintError) || e.code !== "E_RANGE") throw e;
     const value = "efficiency" in c ? c.efficiency : c.dischargeTemperature;
@@ -54,7 +55,7 @@ function isentropicEnd(f: Fluid, suction: State, pOut: number, ref: ReferenceNam
 /** The discharge state at enthalpy h; a low efficiency can push it past the equation's upper temperature. */
 function dischargeAt(f: Fluid, p: number, h: number, ref: ReferenceName, input: string, eta: number): State {
   try {
-    return flashPH(f, p, h, ref);
+    return statePH(f, p, h, ref);
   } catch (e) {
     if (!(e instanceof DomeprintError) || e.code !== "E_RANGE") throw e;
     throw cycleInputError(input, eta, String(eta), `puts the discharge above the upper temperature limit ${temperatureText(f.Tmax)} of the equation for ${f.id}`, "a higher efficiency");

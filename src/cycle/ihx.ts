@@ -1,6 +1,7 @@
 // The internal (suction–liquid) heat exchanger: warm liquid from the condenser or gas cooler gives heat
 // to the cold suction gas. Equal mass flows on both sides; effectiveness = duty / largest possible duty.
-import { flashPH, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+import type { ReferenceName, State } from "../eos/index.js";
+import { statePH, stateTP, type WorkingFluid as Fluid } from "./working-fluid.js";
 import { cycleInputError, requireEffectiveness, temperatureText } from "./check.js";
 
 export interface HeatExchange {
@@ -16,8 +17,8 @@ export interface HeatExchange {
  * Enthalpies rather than heat capacities keep this right where cp varies strongly (near the critical point).
  */
 export function largestDuty(f: Fluid, liquidIn: State, vapourIn: State, ref: ReferenceName): number {
-  const vapourLimit = flashTP(f, liquidIn.T, vapourIn.p, ref).h - vapourIn.h;
-  const liquidLimit = liquidIn.h - flashTP(f, vapourIn.T, liquidIn.p, ref).h;
+  const vapourLimit = stateTP(f, liquidIn.T, vapourIn.p, ref).h - vapourIn.h;
+  const liquidLimit = liquidIn.h - stateTP(f, vapourIn.T, liquidIn.p, ref).h;
   return Math.min(vapourLimit, liquidLimit);
 }
 
@@ -27,5 +28,5 @@ export function internalHeatExchange(f: Fluid, liquidIn: State, vapourIn: State,
     throw cycleInputError(input, eps, String(eps), `the liquid at ${temperatureText(liquidIn.T)} is not warmer than the suction gas at ${temperatureText(vapourIn.T)}, so no heat can pass`, "an internal heat exchanger only where the liquid is warmer than the suction gas");
   }
   const duty = eps * largestDuty(f, liquidIn, vapourIn, ref);
-  return { duty, liquidOut: flashPH(f, liquidIn.p, liquidIn.h - duty, ref), vapourOut: flashPH(f, vapourIn.p, vapourIn.h + duty, ref) };
+  return { duty, liquidOut: statePH(f, liquidIn.p, liquidIn.h - duty, ref), vapourOut: statePH(f, vapourIn.p, vapourIn.h + duty, ref) };
 }

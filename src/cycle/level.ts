@@ -1,7 +1,7 @@
 // Saturation levels of a cycle: an evaporating, condensing or intermediate temperature or pressure
 // turned into a pressure. For blends with glide a temperature names the dew, bubble or mid-point.
 import { DomeprintError } from "../errors.js";
-import { flashTX, saturationP, saturationPressureRange, type Fluid } from "../eos/index.js";
+import { bubbleDewAtP, glides, stateTX, twoPhasePressureSpan, twoPhaseTemperatureTop, type WorkingFluid as Fluid } from "./working-fluid.js";
 import { cycleInputError, pressureText, temperatureText } from "./check.js";
 
 export type GlidePoint = "dew" | "bubble" | "mid";
@@ -34,12 +34,12 @@ const QUALITY: Record<GlidePoint, number> = { dew: 1, bubble: 0, mid: 0.5 };
 
 /** The highest pressure at which the fluid has a two-phase region the engine solves [Pa]. */
 export function twoPhasePressureLimit(f: Fluid): number {
-  return f.pseudoPure ? f.pc : saturationPressureRange(f)[1];
+  return twoPhasePressureSpan(f)[1];
 }
 
 /** The highest saturation temperature the engine solves [K]. */
 export function twoPhaseTemperatureLimit(f: Fluid): number {
-  return f.satTmax;
+  return twoPhaseTemperatureTop(f);
 }
 
 function resolvePressure(f: Fluid, input: string, p: number): number {
@@ -60,7 +60,7 @@ function pressureAtTemperature(f: Fluid, input: string, T: number, point: GlideP
       `below ${temperatureText(Tmax)} (above it, use a transcritical cycle: gas-cooler outlet and high-side pressure)`);
   }
   if (T < f.Tmin) throw cycleInputError(input, T, temperatureText(T), `below the lowest temperature of the equation for ${f.id}`, `${temperatureText(f.Tmin)} up to ${temperatureText(Tmax)}`);
-  return flashTX(f, T, QUALITY[point]).p;
+  return stateTX(f, T, QUALITY[point]).p;
 }
 
 /** Resolves a level to its pressure and the bubble and dew temperatures there. */
@@ -68,8 +68,8 @@ export function resolveLevel(f: Fluid, input: string, level: Level, defaultPoint
   const glidePoint = "T" in level ? level.glidePoint ?? defaultPoint : null;
   try {
     const p = "T" in level ? pressureAtTemperature(f, input, level.T, glidePoint!) : resolvePressure(f, input, level.p);
-    const sat = saturationP(f, p);
-    return { input, given: level, glidePoint: f.pseudoPure ? glidePoint : null, p, bubble: sat.TL, dew: sat.TV };
+    const sat = bubbleDewAtP(f, p);
+    return { input, given: level, glidePoint: glides(f) ? glidePoint : null, p, bubble: sat.TL, dew: sat.TV };
   } catch (e) {
     if (!(e instanceof DomeprintError) || e.details.input === input || e.code === "E_CONVERGENCE") throw e;
     const shown = "T" in level ? temperatureText(level.T) : pressureText(level.p);

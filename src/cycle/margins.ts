@@ -1,7 +1,8 @@
 // Superheat and subcooling of a state: how far it lies from the dew and bubble points at its own
 // pressure. Blends count superheat from the dew point and subcooling from the bubble point.
-import { saturationP, saturationPressureRange, type Fluid, type State } from "../eos/index.js";
+import type { State } from "../eos/index.js";
 import { twoPhasePressureLimit } from "./level.js";
+import { bubbleDewAtP, twoPhasePressureSpan, type WorkingFluid as Fluid } from "./working-fluid.js";
 
 export interface Margins {
   /** Bubble and dew temperatures at the state's pressure [K]; absent at or above the critical pressure. */
@@ -15,12 +16,12 @@ export interface Margins {
 
 /** The lowest pressure with a dew and a bubble point inside the equation's range [Pa]. */
 function twoPhasePressureFloor(f: Fluid): number {
-  return f.pseudoPure ? f.pBubble!.value(f.Tmin) : saturationPressureRange(f)[0];
+  return twoPhasePressureSpan(f)[0];
 }
 
 export function saturationMargins(f: Fluid, st: State): Margins {
   if (!(st.p < twoPhasePressureLimit(f) && st.p >= twoPhasePressureFloor(f))) return {};
-  const sat = saturationP(f, st.p);
+  const sat = bubbleDewAtP(f, st.p);
   const m: Margins = { bubble: sat.TL, dew: sat.TV };
   if (st.phase === "two-phase") return m;
   if (st.T >= sat.TV) m.superheat = st.T - sat.TV;

@@ -1,6 +1,7 @@
 // The drawn path of a cycle in (h, p): each leg refined so that the polygon follows the real process —
 // compressions through intermediate states, heat exchangers through the points where they cross the dome.
-import { flashPS, flashPX, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+import type { ReferenceName, State } from "../eos/index.js";
+import { statePS, statePX, type WorkingFluid as Fluid } from "./working-fluid.js";
 import { twoPhasePressureLimit } from "./level.js";
 
 export interface PathPoint { h: number; p: number }
@@ -23,7 +24,7 @@ export function compressionLeg(f: Fluid, from: State, to: State, ref: ReferenceN
   for (let i = 1; i < steps; i++) {
     const t = i / steps;
     const p = Math.exp(lnA + t * (lnB - lnA));
-    out.push(at(flashPS(f, p, from.s + t * (to.s - from.s), ref)));
+    out.push(at(statePS(f, p, from.s + t * (to.s - from.s), ref)));
   }
   out.push(at(to));
   return out;
@@ -33,7 +34,7 @@ export function compressionLeg(f: Fluid, from: State, to: State, ref: ReferenceN
 export function isobaricLeg(f: Fluid, from: State, to: State, ref: ReferenceName): PathPoint[] {
   const out: PathPoint[] = [];
   if (from.p < twoPhasePressureLimit(f)) {
-    const crossings = [flashPX(f, from.p, 0, ref).h, flashPX(f, from.p, 1, ref).h]
+    const crossings = [statePX(f, from.p, 0, ref).h, statePX(f, from.p, 1, ref).h]
       .filter((h) => (h - from.h) * (to.h - h) > 0)
       .sort((a, b) => (to.h > from.h ? a - b : b - a));
     for (const h of crossings) out.push({ h, p: from.p });

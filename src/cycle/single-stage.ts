@@ -7,7 +7,8 @@ import { requireDifference } from "./check.js";
 import { resolveLevel, type Level } from "./level.js";
 import { subcooledLiquid } from "./processes.js";
 import type { CycleResult } from "./result.js";
-import { commonInputs, commonNotes, lineDrops, requireBelow, type CommonSpec } from "./spec.js";
+import { commonNotes, lineDrops, requireBelow, workingInputs, type CommonSpec } from "./spec.js";
+import { glides } from "./working-fluid.js";
 
 export interface SingleStageSpec extends CommonSpec {
   condensing: Level;
@@ -19,7 +20,7 @@ export interface SingleStageSpec extends CommonSpec {
 }
 
 export function singleStageCycle(spec: SingleStageSpec): CycleResult {
-  const { f, ref, superheat, capacity } = commonInputs(spec);
+  const { f, ref, superheat, capacity } = workingInputs(spec);
   const subcooling = requireDifference("subcooling", spec.subcooling ?? 0);
   const evaporating = resolveLevel(f, "evaporating", spec.evaporating, spec.glidePoint);
   const condensing = resolveLevel(f, "condensing", spec.condensing, spec.glidePoint);
@@ -32,7 +33,7 @@ export function singleStageCycle(spec: SingleStageSpec): CycleResult {
   });
   requireRefrigeratingEffect(circuit.performance.refrigeratingEffect, condensing);
   const result: CycleResult = {
-    model: "single-stage", fluid: f.id, blend: f.pseudoPure, reference: ref, levels: { evaporating, condensing }, superheat, subcooling, drops,
+    model: "single-stage", fluid: f.id, blend: glides(f), reference: ref, levels: { evaporating, condensing }, superheat, subcooling, drops,
     notes: [...commonNotes(f), ...circuitNotes(spec.compressor, spec.ihx !== undefined)],
     points: circuit.points, auxiliary: circuit.auxiliary, stages: circuit.stages, performance: circuit.performance, path: circuit.path, branches: [],
   };

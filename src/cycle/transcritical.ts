@@ -39,7 +39,7 @@ function requireGasCoolerOutlet(f: Fluid, T: number, evaporatingDew: number): nu
 
 /** The checks that do not depend on the high-side pressure, so a pressure search can make them once. */
 export function checkTranscriticalInputs(spec: Omit<TranscriticalSpec, "highPressure">) {
-  const common = commonInputs(spec);
+  const common = commonInputs(spec, "a transcritical cycle");
   const evaporating = resolveLevel(common.f, "evaporating", spec.evaporating, spec.glidePoint);
   const Tgc = requireGasCoolerOutlet(common.f, spec.gasCoolerOutlet, evaporating.dew);
   if ("efficiency" in spec.compressor) requireEfficiency("efficiency", spec.compressor.efficiency);

@@ -173,7 +173,7 @@ function lowSteps(c: Common): ChainStep[] {
 }
 
 export function twoStageCycle(spec: TwoStageSpec): CycleResult {
-  const { f, ref, superheat, capacity } = commonInputs(spec);
+  const { f, ref, superheat, capacity } = commonInputs(spec, "a two-stage cycle");
   const subcooling = requireDifference("subcooling", spec.subcooling ?? 0);
   const L = resolveLevels(f, spec);
   const drops = lineDrops(spec, L.evaporating.p, L.condensing.p);

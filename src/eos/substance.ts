@@ -56,7 +56,7 @@ export function resolveSubstance(name: string): Substance {
   const blends = blendFiles().map((b) => b.id);
   throw new DomeprintError(
     "E_UNKNOWN_FLUID",
-    `fluid = ${JSON.stringify(name)}: unknown fluid${hint} Allowed: a fluid id, R-number or chemical name, a blend id, or a composition such as "R32:0.5+R125:0.5" (list them with 'domeprint fluids')`,
+    `fluid = ${JSON.stringify(name)}: unknown fluid${hint}; allowed: a fluid id, R-number or chemical name, a blend id, or a composition such as "R32:0.5+R125:0.5" (list them with 'domeprint fluids')`,
     { input: "fluid", value: name, allowed: [...fluidIds(), ...blends].join(", "), suggestions },
   );
 }

@@ -109,13 +109,19 @@ function solveSingleAtP(mix: Mixture, p: number, which: Target, target: number, 
  * warm-starting each split from the previous one. Returns the state of the last split.
  */
 function regulaFalsi(a: number, ga: number, b: number, gb: number, g: (u: number, warm: boolean) => number, tol: number, what: string): void {
+  const looseTol = 1e3 * tol;
   let side = 0, warm = false;
   for (let k = 0; k < MAX_ITER; k++) {
     let u = b - (gb * (b - a)) / (gb - ga);
     if (!(u > Math.min(a, b) && u < Math.max(a, b))) u = 0.5 * (a + b);
     const gu = g(u, warm);
     warm = true;
-    if (Math.abs(gu) <= tol || Math.abs(b - a) <= 1e-14 * Math.abs(u)) return;
+    if (Math.abs(gu) <= tol) return;
+    // A bracket narrowed to rounding: the target may change faster than u can resolve (almost no glide).
+    if (Math.abs(b - a) <= 1e-14 * Math.abs(u)) {
+      if (Math.abs(gu) <= looseTol) return;
+      throw convergenceError(what, `the two-phase region (the bracket closed with a residual of ${+Math.abs(gu).toPrecision(3)}, allowed ${+looseTol.toPrecision(3)})`);
+    }
     if ((gu > 0) === (gb > 0)) {
       b = u; gb = gu;
       if (side === 1) ga *= 0.5;
@@ -157,6 +163,7 @@ function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: Satu
   for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
   const r = newtonAtP(mix, p, which, target * mix.M, {
     T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T, Thi: dew.T,
+    stallTolerance: 1e-6 * (Math.abs(yV - yL) + Math.abs(target)) * mix.M,
   });
   if (!r) return null;
   return mixtureTwoPhaseState(mix, r.T, p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);

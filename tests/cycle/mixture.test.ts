@@ -1,0 +1,86 @@
+// Single-stage cycles of real mixtures: every point recomputed from the mixture flashes independently of
+// the cycle code, the energy balance, glide points on the real bubble and dew points, the pure limit, CLI.
+import { describe, expect, it } from "vitest";
+import { flashTP, getFluid, getMixture, mixtureFlash, mixtureSaturationP } from "../../src/eos/index.js";
+import { findPoint, singleStageCycle, type CycleResult } from "../../src/cycle/index.js";
+import { cli } from "../cli/run.js";
+import { rel } from "../support.js";
+
+const C = (t: number) => t + 273.15;
+const at = (r: CycleResult, role: Parameters<typeof findPoint>[1]) => findPoint(r.points, role)!.state;
+
+describe("single-stage cycle of a real mixture", () => {
+  const base = { evaporating: { T: C(-10) }, condensing: { T: C(40) }, superheat: 5, subcooling: 3, compressor: { efficiency: 0.7 } };
+
+  for (const [id, glidePoint] of [["R454B", "dew"], ["R407C-mix", "mid"], ["R448A", "bubble"]] as const) {
+    it(`${id} at ${glidePoint} points: each point is its definition, and the energy balance closes`, () => {
+      const mix = getMixture(id);
+      const r = singleStageCycle({ ...base, fluid: id, glidePoint });
+      const q = { dew: 1, bubble: 0, mid: 0.5 }[glidePoint];
+      // The levels: the given temperature sits at the chosen point of the glide at the level's pressure.
+      for (const [level, T] of [[r.levels.evaporating, C(-10)], [r.levels.condensing!, C(40)]] as const) {
+        expect(rel(mixtureFlash(mix, { T, x: q }).p, level.p)).toBeLessThan(1e-9);
+        const sat = mixtureSaturationP(mix, level.p);
+        expect(Math.abs(level.bubble - sat.bubble.T)).toBeLessThan(1e-7);
+        expect(Math.abs(level.dew - sat.dew.T)).toBeLessThan(1e-7);
+        expect(level.dew - level.bubble).toBeGreaterThan(0.3); // these blends glide (ASHRAE 34 zeotropes, common practice)
+      }
+      const pe = r.levels.evaporating.p, pc = r.levels.condensing!.p;
+      const p1 = at(r, "evaporator-outlet"), p2 = at(r, "compressor-discharge"), p3 = at(r, "condenser-outlet"), p4 = at(r, "evaporator-inlet");
+      expect(Math.abs(p1.T - (mixtureSaturationP(mix, pe).dew.T + 5))).toBeLessThan(1e-7);
+      expect(Math.abs(p3.T - (mixtureSaturationP(mix, pc).bubble.T - 3))).toBeLessThan(1e-7);
+      const s2 = mixtureFlash(mix, { p: pc, s: p1.s });
+      expect(Math.abs((s2.h - p1.h) / (p2.h - p1.h) - 0.7)).toBeLessThan(1e-9);
+      expect(Math.abs(p4.h - p3.h)).toBeLessThan(1e-3); // the throttle flash hits h to its tolerance
+      expect(p4.phase).toBe("two-phase");
+      expect(Math.abs(mixtureFlash(mix, { p: pe, h: p3.h }).T - p4.T)).toBeLessThan(1e-9);
+      const perf = r.performance;
+      expect(Math.abs(perf.refrigeratingEffect + perf.compressorWork - perf.heatRejected)).toBeLessThan(1e-3); // J/kg: h3 − h4 of the throttle flash
+      expect(rel(perf.heatRejected, p2.h - p3.h)).toBeLessThan(1e-12);
+      expect(perf.copCooling).toBeGreaterThan(1);
+      expect(perf.copCooling).toBeLessThan(C(-10) / (C(40) - C(-10))); // below the Carnot COP of the levels
+    });
+  }
+
+  it("pure limit: a trace of R125 in R32 gives R32's cycle", () => {
+    const a = singleStageCycle({ ...base, fluid: "R32:0.9999999+R125:0.0000001" });
+    const b = singleStageCycle({ ...base, fluid: "R32" });
+    expect(rel(a.performance.copCooling, b.performance.copCooling)).toBeLessThan(1e-4);
+    expect(rel(a.levels.condensing!.p, b.levels.condensing!.p)).toBeLessThan(1e-5);
+  });
+
+  it("R410A-mix against the pseudo-pure R410A equation fitted to the same mixture model: COP within 1 %", () => {
+    const a = singleStageCycle({ ...base, fluid: "R410A-mix" });
+    const b = singleStageCycle({ ...base, fluid: "R410A" });
+    expect(rel(a.performance.copCooling, b.performance.copCooling)).toBeLessThan(0.01);
+  });
+
+  it("superheat is counted from the real dew point: a pure-fluid flash at the same T would not be vapour-side", () => {
+    const r = singleStageCycle({ ...base, fluid: "R407C-mix", superheat: 0 });
+    expect(at(r, "evaporator-outlet").x).toBe(1);
+    expect(flashTP(getFluid("R32"), 300, 1e5).phase).toBe("vapour");
+  });
+});
+
+describe("domeprint cycle with a real mixture", () => {
+  it("R454B --json: levels at dew points with their glide, states and an energy balance that closes", () => {
+    const r = cli(["cycle", "R454B", "--evaporating", "-10C", "--condensing", "40C", "--superheat", "5K", "--subcooling", "3K", "--efficiency", "0.7", "--json"]);
+    expect(r.code).toBe(0);
+    const o = JSON.parse(r.out);
+    expect(o.fluid).toBe("R454B");
+    expect(o.blend).toBe(true);
+    expect(Math.abs(o.levels.evaporating.dew - C(-10))).toBeLessThan(1e-6);
+    expect(o.levels.evaporating.bubble).toBeLessThan(o.levels.evaporating.dew);
+    const p = o.performance;
+    expect(Math.abs(p.refrigeratingEffect + p.compressorWork - p.heatRejected)).toBeLessThan(1e-3);
+    expect(o.notes.join(" ")).toMatch(/real mixture/);
+  });
+  it("the table flags estimated pairs; two-stage for a mixture is refused naming what is allowed", () => {
+    const t = cli(["cycle", "R407C-mix", "--evaporating", "0C", "--condensing", "45C", "--efficiency", "0.65"]);
+    expect(t.code).toBe(0);
+    expect(t.out).toMatch(/binary parameters estimated for R32\/R125/);
+    const r = cli(["cycle", "R454B", "--evaporating", "-35C", "--condensing", "35C", "--flash-tank", "--efficiency", "0.7"]);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/a two-stage cycle is not available for real mixtures; allowed: a pure fluid or pseudo-pure blend/);
+  });
+});
