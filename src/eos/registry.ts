@@ -4,6 +4,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { join } from "node:path";
 import { DomeprintError } from "../errors.js";
+import { editDistance } from "../edit-distance.js";
 import { fluidFileSchema, type FluidFile } from "./fluid-file.js";
 import { Fluid } from "./fluid.js";
 
@@ -44,25 +45,12 @@ export function fluidIds(): string[] {
   return entries!.map((e) => e.id);
 }
 
-function distance(a: string, b: string): number {
-  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    let prev = row[0]!;
-    row[0] = i;
-    for (let j = 1; j <= b.length; j++) {
-      const cur = row[j]!;
-      row[j] = Math.min(row[j]! + 1, row[j - 1]! + 1, prev + (a[i - 1] === b[j - 1] ? 0 : 1));
-      prev = cur;
-    }
-  }
-  return row[b.length]!;
-}
 
 /** Up to three known names closest to an unknown one. */
 export function suggestFluids(name: string): string[] {
   const idx = buildIndex();
   const q = foldName(name);
-  const scored = [...idx.entries()].map(([k, e]) => ({ id: e.id, d: k.startsWith(q) || q.startsWith(k) ? Math.min(1, distance(q, k)) : distance(q, k) }));
+  const scored = [...idx.entries()].map(([k, e]) => ({ id: e.id, d: k.startsWith(q) || q.startsWith(k) ? Math.min(1, editDistance(q, k)) : editDistance(q, k) }));
   scored.sort((a, b) => a.d - b.d);
   const out: string[] = [];
   for (const s of scored) {

@@ -1,5 +1,6 @@
 // One name, one substance: resolves a fluid name to a pure (or pseudo-pure) Fluid or to a real Mixture,
 // so every command and library entry point accepts blends and composition strings the same way.
+import { editDistance } from "../edit-distance.js";
 import { DomeprintError } from "../errors.js";
 import type { Fluid } from "./fluid.js";
 import { blendFiles, findBlend } from "./mixture/blend-file.js";
@@ -20,19 +21,6 @@ function suggestBlends(name: string): string[] {
   return scored.filter((s) => s.d <= Math.max(2, q.length / 3)).slice(0, 3).map((s) => s.id);
 }
 
-function editDistance(a: string, b: string): number {
-  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    let prev = row[0]!;
-    row[0] = i;
-    for (let j = 1; j <= b.length; j++) {
-      const tmp = row[j]!;
-      row[j] = Math.min(row[j]! + 1, row[j - 1]! + 1, prev + (a[i - 1] === b[j - 1] ? 0 : 1));
-      prev = tmp;
-    }
-  }
-  return row[b.length]!;
-}
 
 /**
  * A pure fluid first (so pseudo-pure blend equations such as "R410A" keep their meaning), then a blend id

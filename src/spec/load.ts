@@ -4,6 +4,7 @@ import { readFileSync } from "node:fs";
 import { parseDocument } from "yaml";
 import type { z } from "zod";
 import { DomeprintError, show } from "../errors.js";
+import { editDistance } from "../edit-distance.js";
 import { KNOWN_KEYS, sheetEntrySchema, type SheetEntry } from "./schema.js";
 
 export interface LoadedSpec {
@@ -20,24 +21,11 @@ export function specError(file: string, path: string, message: string, value?: u
   });
 }
 
-function editDistance(a: string, b: string): number {
-  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    let prev = row[0]!;
-    row[0] = i;
-    for (let j = 1; j <= b.length; j++) {
-      const cur = row[j]!;
-      row[j] = Math.min(row[j]! + 1, row[j - 1]! + 1, prev + (a[i - 1]!.toLowerCase() === b[j - 1]!.toLowerCase() ? 0 : 1));
-      prev = cur;
-    }
-  }
-  return row[b.length]!;
-}
 
 export function didYouMean(key: string, known: readonly string[]): string | undefined {
   let best: string | undefined, bestD = Infinity;
   for (const k of known) {
-    const d = editDistance(key, k);
+    const d = editDistance(key.toLowerCase(), k.toLowerCase());
     if (d < bestD) { bestD = d; best = k; }
   }
   return best !== undefined && bestD <= Math.max(2, Math.floor(key.length / 3)) ? best : undefined;
