@@ -1,6 +1,6 @@
 // buildLineSet: a fluid's whole set of chart lines for one window, unit system, reference state and page,
 // each line traced to the page tolerance. The one entry point the CLI and layout call.
-import { getFluid, type Fluid } from "../eos/index.js";
+import { resolveSubstance, type Fluid } from "../eos/index.js";
 import { makeContext, type Context } from "./context.js";
 import { displayUnit, SI_UNIT } from "./display.js";
 import { criticalPoint, traceSaturationLine } from "./dome.js";
@@ -10,6 +10,7 @@ import { traceIsotherm } from "./isotherm.js";
 import { checkOptions, type CheckedOptions, type LineSetOptions } from "./options.js";
 import { pageMapping, type PageMapping } from "./page.js";
 import { traceQualityLine } from "./quality.js";
+import { buildMixtureLineSet } from "./mixture/line-set.js";
 import { makeTieLines, type TieLines } from "./tie-lines.js";
 import type { Line, LineSet, Point, Quantity } from "./types.js";
 import {
@@ -76,12 +77,14 @@ function traceFamilies(b: Build): Line[] {
 }
 
 /**
- * The chart lines of a fluid (any accepted name). Throws DomeprintError for an unknown fluid, a reference
+ * The chart lines of a fluid (any accepted name; a blend id or composition gives a real mixture's lines). Throws DomeprintError for an unknown fluid, a reference
  * state the fluid cannot have, or a malformed option.
  */
 export function buildLineSet(fluidName: string, options: LineSetOptions = {}): LineSet {
   const opts = checkOptions(options);
-  const f = getFluid(fluidName);
+  const sub = resolveSubstance(fluidName);
+  if (sub.kind === "mixture") return buildMixtureLineSet(sub.mixture, opts);
+  const f = sub.fluid;
   const window = resolveWindow(autoWindow(f, opts.reference, opts.units), opts.window, f);
   const mapping = pageMapping(window, opts.frame);
   const ranges = windowRanges(f, mapping, opts.reference);

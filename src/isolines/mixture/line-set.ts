@@ -1,0 +1,191 @@
+// The chart lines of a real mixture: bubble and dew lines, isotherms sloped across the dome between them,
+// quality lines and isentropes through the two-phase region, traced to the same page tolerance as pure fluids.
+import { H, mixtureFlash, mixtureReferenceOffset, mixtureSaturationT, type Mixture, type MixtureState, type ReferenceName } from "../../eos/index.js";
+import { mixturePropertiesTRho } from "../../eos/mixture/index.js";
+import { inputError } from "../../errors.js";
+import { attempt } from "../context.js";
+import { displayUnit, fromDisplay, SI_UNIT, toDisplay } from "../display.js";
+import { clean, multiplesBetween, niceAtLeast, niceAtMost, ONE_TWO_FIVE, stepFor, WINDOW_MANTISSAS } from "../nice.js";
+import type { CheckedOptions } from "../options.js";
+import { pageMapping, type PageMapping } from "../page.js";
+import { joinParts, traceCurve, type TraceSettings } from "../trace.js";
+import type { ChartWindow, Line, LineSet, Point, Quantity, TraceStats, UnitSystem } from "../types.js";
+import { givenValues, isenthalpValues, isentropeValues, qualityValues, type FamilyValue, type WindowRanges } from "../values.js";
+
+interface MixBuild {
+  mix: Mixture;
+  ref: ReferenceName;
+  opts: CheckedOptions;
+  mapping: PageMapping;
+  trace: TraceSettings;
+  stats: TraceStats;
+  /** Critical point of the envelope, and the range of pressures with a bubble and a dew point. */
+  Tc: number;
+  pc: number;
+  pFloor: number;
+  /** Highest pressure a line may reach [Pa]. */
+  pTop: number;
+}
+
+const T_STEPS = [10, 20, 50, 100];
+const MAX_ISOTHERMS = 36;
+/** Bubble and dew points are solved up to this fraction of the critical pressure; the last sliver closes by a chord. */
+const NEAR_CRITICAL = 1 - 1e-4;
+
+function point(st: MixtureState | null): Point | null {
+  return st ? [st.h, st.p] : null;
+}
+
+/** The default window: as for pure fluids, the dome from a practical low temperature to 1.5 p_c and hot vapour. */
+export function mixtureAutoWindow(mix: Mixture, ref: ReferenceName, units: UnitSystem): ChartWindow {
+  const env = mix.envelope();
+  const Tlow = Math.max(mix.Tmin, env.bubble[0]!.T, Math.min(0.57 * env.critical.T, 213.15));
+  const sat = mixtureSaturationT(mix, Tlow, ref);
+  const floor = Math.max(env.bubble[0]!.p, env.dew[0]!.p);
+  const pRound = niceAtMost(sat.dew.p, WINDOW_MANTISSAS);
+  const pMin = pRound >= floor ? pRound : floor;
+  const pMax = Math.min(niceAtLeast(1.5 * env.critical.p, WINDOW_MANTISSAS), mix.pmax);
+  const hCold = sat.bubble.h;
+  const hHot = mixtureFlash(mix, { T: Math.min(mix.Tmax, 1.3 * env.critical.T), p: pMin }, ref).h;
+  const margin = 0.03 * (hHot - hCold);
+  const lo = toDisplay(units, "enthalpy", hCold - margin), hi = toDisplay(units, "enthalpy", hHot);
+  const step = niceAtLeast((hi - lo) / 40, ONE_TWO_FIVE);
+  return {
+    hMin: fromDisplay(units, "enthalpy", clean(Math.floor(lo / step) * step)),
+    hMax: fromDisplay(units, "enthalpy", clean(Math.ceil(hi / step) * step)),
+    pMin,
+    pMax,
+  };
+}
+
+function resolveMixtureWindow(auto: ChartWindow, o: Partial<ChartWindow> | undefined, mix: Mixture): ChartWindow {
+  const w = { ...auto, ...Object.fromEntries(Object.entries(o ?? {}).filter(([, v]) => v !== undefined)) } as ChartWindow;
+  for (const k of ["hMin", "hMax", "pMin", "pMax"] as const) {
+    if (typeof w[k] !== "number" || !Number.isFinite(w[k])) throw inputError(`window.${k}`, w[k], "not a finite number", "a finite number in SI (J/kg for h, Pa for p)");
+  }
+  if (!(w.hMax > w.hMin)) throw inputError("window.hMax", w.hMax, `not above window.hMin = ${w.hMin} J/kg`, "hMax > hMin");
+  if (!(w.pMin > 0)) throw inputError("window.pMin", w.pMin, "must be positive (the pressure axis is logarithmic)", "pMin > 0 Pa");
+  if (!(w.pMax > w.pMin)) throw inputError("window.pMax", w.pMax, `not above window.pMin = ${w.pMin} Pa`, "pMax > pMin");
+  if (w.pMin >= mix.pmax) throw inputError("window.pMin", w.pMin, `at or above p_max for ${mix.id}`, `pMin < ${mix.pmax} Pa`);
+  return w;
+}
+
+/** Traces t ↦ point over [t0, t1] to the page tolerance. */
+function trace(b: MixBuild, evaluate: (t: number) => Point | null, t0: number, t1: number): Point[][] {
+  return t1 > t0 ? traceCurve(evaluate, t0, t1, b.trace, b.stats) : [];
+}
+
+function lnRange(b: MixBuild, lo: number, hi: number): [number, number] {
+  return [Math.log(Math.max(lo, b.mapping.window.pMin * 0.999)), Math.log(Math.min(hi, b.pTop))];
+}
+
+function domeLine(b: MixBuild, q: 0 | 1): Point[][] {
+  const [t0, t1] = lnRange(b, b.pFloor, b.pc * NEAR_CRITICAL);
+  return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x: q }, b.ref))), t0, t1);
+}
+
+function qualityLine(b: MixBuild, x: number): Point[][] {
+  const [t0, t1] = lnRange(b, b.pFloor, b.pc * NEAR_CRITICAL);
+  return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x }, b.ref))), t0, t1);
+}
+
+/**
+ * An isotherm below the critical temperature runs as vapour up to its dew pressure, through the dome on a
+ * slope to its bubble pressure (the glide), and as liquid above; each part traced in ln p by (T, p) flashes.
+ */
+function isotherm(b: MixBuild, T: number): Point[][] {
+  const at = (t: number) => point(attempt(() => mixtureFlash(b.mix, { T, p: Math.exp(t) }, b.ref)));
+  const [lo, hi] = lnRange(b, b.mapping.window.pMin * 0.999, b.pTop);
+  const sat = T < b.Tc ? attempt(() => mixtureSaturationT(b.mix, T, b.ref)) : null;
+  if (!sat) return trace(b, at, lo, hi);
+  const lnDew = Math.log(sat.dew.p), lnBub = Math.log(sat.bubble.p);
+  // The ends of the two-phase part are the saturated states themselves, so the parts meet exactly.
+  const inDome = (t: number) => (t <= lnDew ? point(sat.dew) : t >= lnBub ? point(sat.bubble) : at(t));
+  const parts: Point[][][] = [
+    trace(b, (t) => (t >= lnDew ? point(sat.dew) : at(t)), lo, Math.min(lnDew, hi)),
+    trace(b, inDome, Math.max(lnDew, lo), Math.min(lnBub, hi)),
+    trace(b, (t) => (t <= lnBub ? point(sat.bubble) : at(t)), Math.max(lnBub, lo), hi),
+  ];
+  return joinParts(b.mapping, parts);
+}
+
+function isentrope(b: MixBuild, s: number): Point[][] {
+  const [lo, hi] = lnRange(b, b.mapping.window.pMin * 0.999, b.pTop);
+  return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), s }, b.ref))), lo, hi);
+}
+
+function ranges(b: MixBuild): WindowRanges {
+  const w = b.mapping.window, mix = b.mix;
+  // A corner beyond the model's range stands in for the nearest state it has: T_max on the right, T_min on the left.
+  const at = (h: number, p: number, T: number) => {
+    const pp = Math.min(p, mix.pmax);
+    return attempt(() => mixtureFlash(mix, { p: pp, h }, b.ref)) ?? attempt(() => mixtureFlash(mix, { T, p: pp }, b.ref));
+  };
+  const bl = at(w.hMin, w.pMin, mix.Tmin), tl = at(w.hMin, w.pMax, mix.Tmin), br = at(w.hMax, w.pMin, mix.Tmax), tr = at(w.hMax, w.pMax, mix.Tmax);
+  const crit = mixtureFlash(mix, { T: b.Tc, p: b.pc }, b.ref);
+  return {
+    Tlo: Math.max(mix.Tmin, Math.min(bl?.T ?? mix.Tmin, tl?.T ?? mix.Tmin)),
+    Thi: Math.min(mix.Tmax, Math.max(br?.T ?? mix.Tmax, tr?.T ?? mix.Tmax)),
+    sLo: tl?.s ?? bl?.s ?? crit.s,
+    sHi: br?.s ?? crit.s,
+    vHi: br?.v ?? crit.v,
+    sCritical: crit.s,
+  };
+}
+
+function lines(b: MixBuild, q: Quantity, v: FamilyValue, pieces: Point[][]): Line[] {
+  const display = { value: v.display, unit: displayUnit(b.opts.units, q).symbol };
+  return pieces.map((points) => ({ quantity: q, value: v.si, unit: SI_UNIT[q], display: { ...display }, rank: v.rank, points }));
+}
+
+function values(b: MixBuild, family: "isotherms" | "isentropes" | "qualities" | "isenthalps", q: Quantity, auto: () => FamilyValue[]): FamilyValue[] {
+  const given = b.opts.values[family];
+  return given ? givenValues(b.opts.units, q, given) : auto();
+}
+
+function isothermValues(b: MixBuild, r: WindowRanges): FamilyValue[] {
+  const u = b.opts.units;
+  const lo = toDisplay(u, "temperature", r.Tlo), hi = toDisplay(u, "temperature", r.Thi);
+  const step = b.opts.densities.isotherm ?? stepFor(hi - lo, T_STEPS, MAX_ISOTHERMS);
+  return multiplesBetween(lo, hi, step).map((d) => ({ si: fromDisplay(u, "temperature", d), display: d, rank: "major" as const }));
+}
+
+/** The line set of a real mixture; isochores are not drawn for mixtures (the mixture flash has no (T, v) pair). */
+export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet {
+  const ref = opts.reference;
+  mixtureReferenceOffset(mix, ref);
+  const window = resolveMixtureWindow(mixtureAutoWindow(mix, ref, opts.units), opts.window, mix);
+  const mapping = pageMapping(window, opts.frame);
+  const env = mix.envelope();
+  const stats: TraceStats = { evaluations: 0, capped: 0, breaks: 0, bridges: 0, longestBridgeMm: 0 };
+  const b: MixBuild = {
+    mix, ref, opts, mapping, trace: { mapping, toleranceMm: opts.toleranceMm }, stats,
+    Tc: env.critical.T, pc: env.critical.p, pFloor: Math.max(env.bubble[0]!.p, env.dew[0]!.p), pTop: Math.min(window.pMax, mix.pmax),
+  };
+  const r = ranges(b);
+  const on = opts.families, d = opts.densities;
+  const out: Line[] = [];
+  if (on.dome) {
+    out.push(...lines(b, "saturation-liquid", { si: 0, display: 0, rank: "major" }, domeLine(b, 0)));
+    out.push(...lines(b, "saturation-vapour", { si: 1, display: 1, rank: "major" }, domeLine(b, 1)));
+  }
+  if (on.qualities) for (const v of values(b, "qualities", "quality", () => qualityValues(d))) out.push(...lines(b, "quality", v, qualityLine(b, v.si)));
+  if (on.isotherms) {
+    for (const v of values(b, "isotherms", "temperature", () => isothermValues(b, r)).filter((v) => v.si >= mix.Tmin && v.si <= mix.Tmax))
+      out.push(...lines(b, "temperature", v, isotherm(b, v.si)));
+  }
+  if (on.isentropes) for (const v of values(b, "isentropes", "entropy", () => isentropeValues(opts.units, r, d))) out.push(...lines(b, "entropy", v, isentrope(b, v.si)));
+  if (on.isenthalps) {
+    for (const v of values(b, "isenthalps", "enthalpy", () => isenthalpValues(opts.units, mapping, d)).filter((v) => v.si >= window.hMin && v.si <= window.hMax))
+      out.push(...lines(b, "enthalpy", v, [[[v.si, window.pMin], [v.si, window.pMax]]]));
+  }
+  // The critical point's enthalpy explicitly at the envelope's (T, ρ): no flash so close to it.
+  const o = new Float64Array(12);
+  mixturePropertiesTRho(mix.model, env.critical.T, env.critical.rho, mix.z, o);
+  const off = mixtureReferenceOffset(mix, ref);
+  return {
+    fluid: mix.id, units: opts.units, reference: ref, window, frame: opts.frame, toleranceMm: opts.toleranceMm,
+    critical: { T: env.critical.T, p: env.critical.p, h: o[H]! + off.dh },
+    lines: out, stats,
+  };
+}

@@ -1,0 +1,102 @@
+// Isolines of real mixtures: every drawn point lies on its line by an independent (p, h) mixture flash, chords
+// keep within the page tolerance of the true line (recomputed at mid-pressure), and isotherms slope across the dome.
+import { beforeAll, describe, expect, it } from "vitest";
+import { getMixture, mixtureFlash, mixtureSaturationT, type Mixture } from "../../src/eos/index.js";
+import { DomeprintError } from "../../src/errors.js";
+import { buildLineSet, type Line, type LineSet, type Point } from "../../src/isolines/index.js";
+import { deviationMm, mappingOf } from "./support.js";
+
+const REF = "iir";
+
+/** The mixture's state at a drawn point, or null where the flash refuses it with a typed error (counted by the caller). */
+function stateAt(mix: Mixture, q: Point) {
+  try {
+    return mixtureFlash(mix, { p: q[1], h: q[0] }, REF);
+  } catch (e) {
+    if (e instanceof DomeprintError) return null;
+    throw e;
+  }
+}
+
+/** The line's own value at a drawn point, via the (p, h) flash; saturation lines read their quality. */
+function valueAt(mix: Mixture, line: Line, q: Point): number | null {
+  const st = stateAt(mix, q);
+  if (!st) return null;
+  switch (line.quantity) {
+    case "temperature": return st.T;
+    case "entropy": return st.s;
+    case "quality": case "saturation-liquid": case "saturation-vapour": return st.x ?? (st.phase === "liquid" ? 0 : 1);
+    default: return null;
+  }
+}
+
+const TOL: Partial<Record<Line["quantity"], number>> = { temperature: 1e-6, entropy: 1e-6, quality: 1e-7, "saturation-liquid": 1e-7, "saturation-vapour": 1e-7 };
+
+for (const id of ["R454B", "R407C-mix"]) {
+  describe(`${id} line set`, () => {
+    let set: LineSet;
+    let mix: Mixture;
+    beforeAll(() => {
+      mix = getMixture(id);
+      set = buildLineSet(id, { reference: REF, families: { isenthalps: false } });
+    }, 60_000);
+
+    it("has a dome, isotherms, quality lines and isentropes, and no breaks", () => {
+      const q = new Set(set.lines.map((l) => l.quantity));
+      for (const k of ["saturation-liquid", "saturation-vapour", "temperature", "quality", "entropy"]) expect(q.has(k as Line["quantity"])).toBe(true);
+      expect(set.stats.breaks).toBe(0);
+      expect(set.fluid).toBe(id);
+    });
+
+    it("every drawn point (sampled) is on its line by an independent (p, h) flash", () => {
+      let checked = 0, refused = 0;
+      for (const line of set.lines) {
+        const tol = TOL[line.quantity];
+        if (tol === undefined) continue;
+        for (let k = 0; k < line.points.length; k += 3) {
+          const v = valueAt(mix, line, line.points[k]!);
+          if (v === null) { refused++; continue; }
+          const scale = line.quantity === "entropy" ? Math.abs(line.value) + 1e3 : 1;
+          expect(Math.abs(v - line.value)).toBeLessThanOrEqual(tol * scale);
+          checked++;
+        }
+      }
+      expect(checked).toBeGreaterThan(500);
+      expect(refused).toBeLessThan(0.01 * checked);
+    });
+
+    it("isotherm chords keep within the page tolerance: the true point at each chord's mid-pressure", () => {
+      const m = mappingOf(set);
+      let worst = 0, n = 0;
+      for (const line of set.lines.filter((l) => l.quantity === "temperature")) {
+        for (let k = 0; k + 1 < line.points.length; k += 2) {
+          const a = line.points[k]!, b = line.points[k + 1]!;
+          const pm = Math.sqrt(a[1] * b[1]);
+          if (Math.abs(Math.log(a[1] / b[1])) < 1e-9) continue;
+          let st;
+          try { st = mixtureFlash(mix, { T: line.value, p: pm }, REF); } catch { continue; }
+          worst = Math.max(worst, deviationMm(m, a, b, [st.h, st.p]));
+          n++;
+        }
+      }
+      expect(n).toBeGreaterThan(100);
+      // The tracer bounds the deviation at parameter midpoints; elsewhere on a chord it may exceed it slightly.
+      expect(worst).toBeLessThan(1.5 * set.toleranceMm);
+    });
+
+    it("an isotherm crosses the dome on a slope: from its dew pressure up to its bubble pressure (the glide)", () => {
+      const T = 273.15;
+      const line = set.lines.find((l) => l.quantity === "temperature" && Math.abs(l.value - T) < 1e-9)!;
+      expect(line).toBeDefined();
+      const sat = mixtureSaturationT(mix, T, REF);
+      expect(sat.bubble.p).toBeGreaterThan(sat.dew.p);
+      // Both ends of the two-phase part are vertices of the drawn line.
+      const has = (st: { h: number; p: number }) => line.points.some((q) => Math.abs(q[0] - st.h) < 1e-6 && Math.abs(q[1] / st.p - 1) < 1e-12);
+      expect(has(sat.bubble)).toBe(true);
+      expect(has(sat.dew)).toBe(true);
+      const inside = line.points.filter((q) => q[1] > sat.dew.p * (1 + 1e-9) && q[1] < sat.bubble.p * (1 - 1e-9));
+      expect(inside.length).toBeGreaterThan(0);
+      for (const q of inside) expect(stateAt(mix, q)!.phase).toBe("two-phase");
+    });
+  });
+}
