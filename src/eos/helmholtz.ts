@@ -47,17 +47,19 @@ export interface Helmholtz {
 }
 
 /**
- * Chains a fluid's kernels into one function. Built per fluid with its own call sites, so each site
- * sees a single kernel and stays monomorphic however many fluids a process loads.
+ * Chains a fluid's kernels into one function that clears the accumulator and calls each kernel in turn.
+ * Built per fluid with its own call sites, so each site sees one kernel and stays monomorphic however many
+ * fluids a process loads.
  */
-function chain(fns: ((...args: any[]) => void)[], outer: string[], prologue: string, inner: string[]): (...args: number[]) => void {
+function chain(fns: ((...args: never[]) => void)[], acc: Float64Array, outer: string[], prologue: string, inner: string[]): (...args: number[]) => void {
   const names = fns.map((_, k) => `k${k}`);
   const src = `const [${names.join(", ")}] = fns;
 return function (${outer.join(", ")}) {
+  ${Array.from(acc, (_, j) => `acc[${j}] = 0;`).join(" ")}
   ${prologue}
-  ${names.map((n) => `${n}(${inner.join(", ")});`).join("\n  ")}
+  ${names.map((n) => `${n}(${[...inner, "acc"].join(", ")});`).join("\n  ")}
 };`;
-  return new Function("fns", src)(fns) as (...args: number[]) => void;
+  return new Function("fns", "acc", src)(fns, acc) as (...args: number[]) => void;
 }
 
 export function buildHelmholtz(f: FluidFile): Helmholtz {
@@ -66,23 +68,15 @@ export function buildHelmholtz(f: FluidFile): Helmholtz {
   const ideal = f.ideal.map((t) => idealKernel(t, Tr));
   const r = new Float64Array(6);
   const i = new Float64Array(3);
-  const resFns = residual.map((k) => (tau: number, delta: number, lnTau: number, lnDelta: number) => k.add(tau, delta, lnTau, lnDelta, r));
-  const idFns = ideal.map((k) => (tau: number, lnTau: number) => k.add(tau, lnTau, i));
-  const evalResidual = chain(resFns, ["tau", "delta"], "const lnTau = Math.log(tau), lnDelta = Math.log(delta);", ["tau", "delta", "lnTau", "lnDelta"]);
-  const evalIdeal = chain(idFns, ["tau"], "const lnTau = Math.log(tau);", ["tau", "lnTau"]);
+  const evalResidual = chain(residual.map((k) => k.add), r, ["tau", "delta"], "const lnTau = Math.log(tau), lnDelta = Math.log(delta);", ["tau", "delta", "lnTau", "lnDelta"]);
+  const evalIdeal = chain(ideal.map((k) => k.add), i, ["tau"], "const lnTau = Math.log(tau);", ["tau", "lnTau"]);
   return {
     Tr,
     rhor: f.reducing.rho,
     R: f.gasConstant,
     r,
     i,
-    evalResidual(tau, delta) {
-      r[0] = 0; r[1] = 0; r[2] = 0; r[3] = 0; r[4] = 0; r[5] = 0;
-      evalResidual(tau, delta);
-    },
-    evalIdeal(tau) {
-      i[0] = 0; i[1] = 0; i[2] = 0;
-      evalIdeal(tau);
-    },
+    evalResidual,
+    evalIdeal,
   };
 }
