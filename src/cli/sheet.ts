@@ -91,7 +91,7 @@ export function registerSheet(program: Command, io: Io, setCode: (c: number) => 
   program
     .command("sheet")
     .description("typeset a fluid's pressure–enthalpy chart for print: PDF, SVG, PNG or JSON, written atomically")
-    .argument("<fluid>", "fluid id, R-number (R744, R-744) or chemical name")
+    .argument("<fluid>", "fluid id, R-number (R744, R-744), chemical name, blend id (R454B) or composition (\"R32:0.5+R125:0.5\")")
     .option("--paper <name>", `paper: ${paperNames().join(", ")} or WxH in mm (default: the style's)`)
     .option("--orientation <o>", "portrait or landscape (default: the style's)")
     .option("--units <system>", "si (bar, kJ/kg, °C) or ip (psi, Btu/lb, °F)", "si")

@@ -45,6 +45,10 @@ export interface FluidIdentity {
   glide: boolean;
   /** Reference state for h and s, in words. */
   reference: string;
+  /** A real mixture's composition in words (mass fractions), printed under its name. */
+  composition?: string;
+  /** A real mixture's estimated binary pairs in words; printed as a flagged line. */
+  estimatedPairs?: string;
 }
 
 export interface UserFields {

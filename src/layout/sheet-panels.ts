@@ -23,6 +23,8 @@ export function titlePanel(content: SheetContent, type: TypeScale): Panel {
   if (fields.title) items.push({ kind: "heading", text: fields.title, scale: type.subheading * 1.15 });
   items.push({ kind: "heading", text: fluid.designation, scale: type.heading });
   items.push({ kind: "paragraph", text: `${fluid.chemicalName}, ${fluid.formula}`, scale: type.subheading });
+  if (fluid.composition) items.push({ kind: "paragraph", text: fluid.composition, scale: type.subheading });
+  if (fluid.estimatedPairs) items.push({ kind: "bullet", text: `binary parameters estimated for ${fluid.estimatedPairs}`, strong: true });
   items.push({ kind: "paragraph", text: fluid.safetyClass ? `ISO 817 safety class ${fluid.safetyClass}` : "no ISO 817 safety class recorded", scale: type.subheading });
   items.push({ kind: "space" });
   const field = (label: string, value: string | undefined) => {

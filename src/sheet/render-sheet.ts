@@ -16,7 +16,8 @@ import { renderPdf } from "../render/pdf.js";
 import { renderSvg } from "../render/svg.js";
 import { atmosphereAt } from "../units/index.js";
 import { defaultReference, engineData, fluidIdentity, hasGlide, saturationRows, saturationTicks } from "./content.js";
-import { getFluid } from "../eos/index.js";
+import { resolveSubstance } from "../eos/index.js";
+import { mixtureDefaultReference, mixtureHashData, mixtureIdentity, mixtureLines, mixtureSaturationRows, mixtureSaturationTicks } from "./mixture-content.js";
 import { DomeprintError } from "../errors.js";
 import { readingsFileOverlay } from "./overlays.js";
 import { cycleFileOverlay } from "./cycle-file.js";
@@ -75,17 +76,21 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
   const orientation = o.orientation ?? style.defaults.orientation;
   const paper = resolvePaper(o.paper ?? style.defaults.paper, orientation);
   const wantsTable = o.saturationTable ?? style.defaults.saturationTable;
-  const fluid = getFluid(o.fluid);
-  const glide = hasGlide(fluid);
+  // A real mixture gathers its data through mixture-content.ts; a pure fluid through content.ts.
+  const sub = resolveSubstance(o.fluid);
+  const mix = sub.kind === "mixture" ? sub.mixture : null;
+  const fluid = sub.kind === "pure" ? sub.fluid : null;
+  const fluidId = mix ? mix.id : fluid!.id;
+  const glide = mix ? true : hasGlide(fluid!);
   // Beside a landscape plot the table may take at most two fifths of the sheet; on smaller paper it is left out.
   const tableWidth = wantsTable ? panelMinWidth(style, paper, glide) : 0;
   const table = wantsTable && (paper.width < paper.height || tableWidth <= 0.4 * paper.width);
-  const reference = o.reference ?? defaultReference(fluid);
+  const reference = o.reference ?? (mix ? mixtureDefaultReference(mix) : defaultReference(fluid!));
   const atmosphere = atmosphereAt(o.altitude);
   const overlays = [
     ...o.overlays,
-    ...o.cycleFiles.map((file) => cycleFileOverlay(file, fluid.id, reference, o.units, atmosphere)),
-    ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluid.id, reference, o.units, o.altitudeGiven ? o.altitude : undefined)),
+    ...o.cycleFiles.map((file) => cycleFileOverlay(file, fluidId, reference, o.units, atmosphere)),
+    ...o.pointsFiles.map((file) => readingsFileOverlay(file, fluidId, reference, o.units, o.altitudeGiven ? o.altitude : undefined)),
   ];
   const landscape = paper.width >= paper.height;
   // The panels' usual share first; small paper gets a wider column (or taller band) and is traced again.
@@ -101,15 +106,17 @@ export function composeSheet(options: SheetOptions): ComposedSheet {
       ...(o.margin !== undefined ? { margin: o.margin } : {}),
       overlayBand: overlayBandHeight(style, paper, overlays),
     });
-    const data = engineData(fluid, reference, units, plan.plot, o.lineOptions);
-    const identity = fluidIdentity(data.fluid, data.reference);
+    const data = mix
+      ? { reference, lines: mixtureLines(mix, reference, units, plan.plot, o.lineOptions), hashData: mixtureHashData(mix) as unknown }
+      : { ...engineData(fluid!, reference, units, plan.plot, o.lineOptions), hashData: fluid!.data as unknown };
+    const identity = mix ? mixtureIdentity(mix, data.reference) : fluidIdentity(fluid!, data.reference);
     // Overlays enter the hash as drawn (not as file names), so an edited readings file gives a new hash.
-    const hash = inputsHash({ version: VERSION, fluid: data.fluid.data, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, cycleFiles: undefined, overlays }, paper, reference: data.reference });
+    const hash = inputsHash({ version: VERSION, fluid: data.hashData, style, options: { ...o, formats: undefined, dpi: undefined, pointsFiles: undefined, cycleFiles: undefined, overlays }, paper, reference: data.reference });
     const content: SheetContent = {
       fluid: identity,
       lines: data.lines,
-      saturationScale: saturationTicks(data.fluid, data.lines, units),
-      ...(table ? { saturationTable: saturationRows(data.fluid, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
+      saturationScale: mix ? mixtureSaturationTicks(mix, data.lines, units) : saturationTicks(fluid!, data.lines, units),
+      ...(table ? { saturationTable: mix ? mixtureSaturationRows(mix, data.lines, units, data.reference, TABLE_STEP[o.units]) : saturationRows(fluid!, data.lines, units, data.reference, TABLE_STEP[o.units]) } : {}),
       overlays,
       ...(o.gauge ? { gauge: { altitude: o.altitude, atmosphere } } : {}),
       units,
