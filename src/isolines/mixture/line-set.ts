@@ -1,7 +1,7 @@
 // The chart lines of a real mixture: bubble and dew lines, isotherms sloped across the dome between them,
 // quality lines and isentropes through the two-phase region, traced to the same page tolerance as pure fluids.
-import { H, mixtureFlash, mixtureReferenceOffset, mixtureSaturationT, type Mixture, type MixtureState, type ReferenceName } from "../../eos/index.js";
-import { mixturePropertiesTRho } from "../../eos/mixture/index.js";
+import { H, P, mixtureFlash, mixtureReferenceOffset, mixtureSaturationT, type Mixture, type MixtureState, type ReferenceName } from "../../eos/index.js";
+import { mixtureDensityTP, mixturePropertiesTRho } from "../../eos/mixture/index.js";
 import { inputError } from "../../errors.js";
 import { attempt } from "../context.js";
 import { displayUnit, fromDisplay, SI_UNIT, toDisplay } from "../display.js";
@@ -15,6 +15,7 @@ import { givenValues, isenthalpValues, isentropeValues, qualityValues, type Fami
 interface MixBuild {
   mix: Mixture;
   ref: ReferenceName;
+  off: { dh: number; ds: number };
   opts: CheckedOptions;
   mapping: PageMapping;
   trace: TraceSettings;
@@ -89,9 +90,19 @@ function qualityLine(b: MixBuild, x: number): Point[][] {
   return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x }, b.ref))), t0, t1);
 }
 
+/** The explicit point at T [K] and molar density ρ [mol/m³] of the overall composition: (h, p), or null outside the model. */
+function pointTRho(b: MixBuild, T: number, rho: number, o: Float64Array): Point | null {
+  mixturePropertiesTRho(b.mix.model, T, rho, b.mix.z, o);
+  const p = o[P]!;
+  if (!(p > 0) || p > b.mix.pmax || !Number.isFinite(o[H]!)) return null;
+  return [o[H]! + b.off.dh, p];
+}
+
 /**
  * An isotherm below the critical temperature runs as vapour up to its dew pressure, through the dome on a
- * slope to its bubble pressure (the glide), and as liquid above; each part traced in ln p by (T, p) flashes.
+ * slope to its bubble pressure (the glide), and as liquid above. The one-phase parts are explicit in (T, ρ)
+ * between the saturated densities and those at the window's edges; the two-phase part is traced in ln p by
+ * (T, p) flashes. Above the critical temperature the whole line is traced by (T, p) flashes.
  */
 function isotherm(b: MixBuild, T: number): Point[][] {
   const at = (t: number) => point(attempt(() => mixtureFlash(b.mix, { T, p: Math.exp(t) }, b.ref)));
@@ -99,13 +110,26 @@ function isotherm(b: MixBuild, T: number): Point[][] {
   const sat = T < b.Tc ? attempt(() => mixtureSaturationT(b.mix, T, b.ref)) : null;
   if (!sat) return trace(b, at, lo, hi);
   const lnDew = Math.log(sat.dew.p), lnBub = Math.log(sat.bubble.p);
+  const o = new Float64Array(12), M = b.mix.M;
+  const parts: Point[][][] = [];
+  // Vapour: ln ρ from the window's lowest pressure up to the dew point's density (its end is the dew state itself).
+  if (lnDew > lo) {
+    const rhoLow = attempt(() => mixtureDensityTP(b.mix.model, T, Math.exp(lo), b.mix.z, "vapour"));
+    const rhoDew = sat.dew.rho / M;
+    if (rhoLow !== null && rhoLow < rhoDew) {
+      const t0 = Math.log(rhoLow), t1 = Math.log(rhoDew);
+      parts.push(trace(b, (t) => (t >= t1 ? point(sat.dew) : pointTRho(b, T, Math.exp(t), o)), t0, t1));
+    }
+  }
   // The ends of the two-phase part are the saturated states themselves, so the parts meet exactly.
   const inDome = (t: number) => (t <= lnDew ? point(sat.dew) : t >= lnBub ? point(sat.bubble) : at(t));
-  const parts: Point[][][] = [
-    trace(b, (t) => (t >= lnDew ? point(sat.dew) : at(t)), lo, Math.min(lnDew, hi)),
-    trace(b, inDome, Math.max(lnDew, lo), Math.min(lnBub, hi)),
-    trace(b, (t) => (t <= lnBub ? point(sat.bubble) : at(t)), Math.max(lnBub, lo), hi),
-  ];
+  parts.push(trace(b, inDome, Math.max(lnDew, lo), Math.min(lnBub, hi)));
+  // Liquid: ρ from the bubble point's density up to the density at the top pressure.
+  if (lnBub < hi) {
+    const rhoBub = sat.bubble.rho / M;
+    const rhoTop = attempt(() => mixtureDensityTP(b.mix.model, T, Math.exp(hi), b.mix.z, "liquid", rhoBub));
+    if (rhoTop !== null && rhoTop > rhoBub) parts.push(trace(b, (t) => (t <= rhoBub ? point(sat.bubble) : pointTRho(b, T, t, o)), rhoBub, rhoTop));
+  }
   return joinParts(b.mapping, parts);
 }
 
@@ -153,13 +177,12 @@ function isothermValues(b: MixBuild, r: WindowRanges): FamilyValue[] {
 /** The line set of a real mixture; isochores are not drawn for mixtures (the mixture flash has no (T, v) pair). */
 export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet {
   const ref = opts.reference;
-  mixtureReferenceOffset(mix, ref);
   const window = resolveMixtureWindow(mixtureAutoWindow(mix, ref, opts.units), opts.window, mix);
   const mapping = pageMapping(window, opts.frame);
   const env = mix.envelope();
   const stats: TraceStats = { evaluations: 0, capped: 0, breaks: 0, bridges: 0, longestBridgeMm: 0 };
   const b: MixBuild = {
-    mix, ref, opts, mapping, trace: { mapping, toleranceMm: opts.toleranceMm }, stats,
+    mix, ref, off: mixtureReferenceOffset(mix, ref), opts, mapping, trace: { mapping, toleranceMm: opts.toleranceMm }, stats,
     Tc: env.critical.T, pc: env.critical.p, pFloor: Math.max(env.bubble[0]!.p, env.dew[0]!.p), pTop: Math.min(window.pMax, mix.pmax),
   };
   const r = ranges(b);
