@@ -3,7 +3,6 @@
 import { readFileSync } from "node:fs";
 import type { Command } from "commander";
 import { DomeprintError } from "../errors.js";
-import { getFluid } from "../eos/index.js";
 import { atmosphereAt, foldUnit, parseQuantity, spellings, unitOf } from "../units/index.js";
 import {
   cycleTables, DISPLAY_UNITS, evaluateReadings, formatter, GLIDE_POINTS, optimiseHighPressure, parseReadings, readingsTable,
@@ -215,7 +214,7 @@ function runReadings(io: Io, fluid: string, o: Options, units: DisplayUnits): vo
     throw usage("--readings", o.readings, `cannot be read (${(e as NodeJS.ErrnoException).code ?? "error"})`, "a readable readings file");
   }
   const altitude = o.altitude === undefined ? undefined : parseQuantity("--altitude", "length", o.altitude);
-  const res = evaluateReadings(getFluid(fluid), parseReadings(text, { source: o.readings!, ...(altitude !== undefined ? { altitude } : {}) }), o.reference);
+  const res = evaluateReadings(fluid, parseReadings(text, { source: o.readings!, ...(altitude !== undefined ? { altitude } : {}) }), o.reference);
   io.out(o.json ? JSON.stringify(readingsJson(res)) + "\n" : readingsText(res, units));
 }
 

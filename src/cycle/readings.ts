@@ -1,10 +1,11 @@
 // Measured points turned into states: each reading's state from its pressure and temperature, its
 // superheat or subcooling, and flags where a reading cannot be what its line should carry.
 import { DomeprintError } from "../errors.js";
-import { checkReferenceName, flashTP, getFluid, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+import { checkReferenceName, type ReferenceName, type State } from "../eos/index.js";
 import { cycleInputError } from "./check.js";
 import { saturationMargins, type Margins } from "./margins.js";
 import type { Reading, ReadingsFile } from "./readings-file.js";
+import { criticalPressure, stateTP, workingFluid, type WorkingFluid as Fluid } from "./working-fluid.js";
 
 /** Why a reading looks wrong: the kind, and the limit it crossed [K or Pa] or the engine's message. */
 export type Flag =
@@ -33,12 +34,13 @@ export interface ReadingsResult {
 /** Flags for what a reading's line should carry; a subcritical expectation above the critical pressure is flagged too. */
 export function plausibilityFlags(f: Fluid, r: Reading, m: Margins): Flag[] {
   const flags: Flag[] = [];
+  const pc = criticalPressure(f);
   if (r.expect === "supercritical") {
-    if (r.p <= f.pc) flags.push({ kind: "not-supercritical", limit: f.pc });
+    if (r.p <= pc) flags.push({ kind: "not-supercritical", limit: pc });
     return flags;
   }
   if (!r.expect) return flags;
-  if (r.p >= f.pc) flags.push({ kind: "above-critical", limit: f.pc });
+  if (r.p >= pc) flags.push({ kind: "above-critical", limit: pc });
   if (r.expect === "vapour" && m.dew !== undefined && r.T < m.dew) flags.push({ kind: "below-dew", limit: m.dew });
   if (r.expect === "liquid" && m.bubble !== undefined && r.T > m.bubble) flags.push({ kind: "above-bubble", limit: m.bubble });
   return flags;
@@ -47,7 +49,7 @@ export function plausibilityFlags(f: Fluid, r: Reading, m: Margins): Flag[] {
 function evaluate(f: Fluid, r: Reading, ref: ReferenceName): EvaluatedReading {
   let state: State;
   try {
-    state = flashTP(f, r.T, r.p, ref);
+    state = stateTP(f, r.T, r.p, ref);
   } catch (e) {
     if (!(e instanceof DomeprintError) || e.code === "E_CONVERGENCE") throw e;
     return { ...r, flags: [{ kind: "out-of-range", message: e.message }] };
@@ -58,9 +60,9 @@ function evaluate(f: Fluid, r: Reading, ref: ReferenceName): EvaluatedReading {
 
 /** Evaluates every reading of a file; a file naming another fluid than the one given is refused. */
 export function evaluateReadings(fluid: string | Fluid, file: ReadingsFile, reference: string = "native"): ReadingsResult {
-  const f = typeof fluid === "string" ? getFluid(fluid) : fluid;
-  if (file.fluid !== undefined && getFluid(file.fluid).id !== f.id) {
-    throw cycleInputError("fluid", f.id, f.id, `the readings file ${file.source} names ${file.fluid}`, `the fluid the file names (${getFluid(file.fluid).id}), or a file without @fluid`);
+  const f = typeof fluid === "string" ? workingFluid(fluid) : fluid;
+  if (file.fluid !== undefined && workingFluid(file.fluid).id !== f.id) {
+    throw cycleInputError("fluid", f.id, f.id, `the readings file ${file.source} names ${file.fluid}`, `the fluid the file names (${workingFluid(file.fluid).id}), or a file without @fluid`);
   }
   const ref = checkReferenceName(reference);
   const out: ReadingsResult = { fluid: f.id, reference: ref, source: file.source, gauge: file.gauge, readings: file.readings.map((r) => evaluate(f, r, ref)) };

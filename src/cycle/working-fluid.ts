@@ -1,7 +1,7 @@
 // The property calls a cycle makes, for a pure (or pseudo-pure) Fluid or a real Mixture alike, so the
 // cycle's processes are written once. Mixtures give bubble and dew points from their own phase equilibrium.
 import {
-  flashPH, flashPS, flashPX, flashTP, flashTX, Mixture, mixtureFlash, mixtureSaturationP, saturationP, saturationPressureRange,
+  flashPH, flashPS, flashPX, flashTP, flashTX, Mixture, mixtureFlash, mixtureSaturationP, resolveSubstance, saturationP, saturationPressureRange,
   type Fluid, type ReferenceName, type State,
 } from "../eos/index.js";
 
@@ -52,6 +52,17 @@ export function twoPhasePressureSpan(f: WorkingFluid): [number, number] {
   if (!isMixture(f)) return f.pseudoPure ? [f.pBubble!.value(f.Tmin), f.pc] : saturationPressureRange(f);
   const env = f.envelope();
   return [Math.max(env.bubble[0]!.p, env.dew[0]!.p), env.critical.p];
+}
+
+/** The critical pressure [Pa]: the equation's, or where a mixture's bubble and dew lines meet. */
+export function criticalPressure(f: WorkingFluid): number {
+  return isMixture(f) ? f.envelope().critical.p : f.pc;
+}
+
+/** A fluid, blend or composition by name (as resolveSubstance reads it). */
+export function workingFluid(name: string): WorkingFluid {
+  const sub = resolveSubstance(name);
+  return sub.kind === "pure" ? sub.fluid : sub.mixture;
 }
 
 /** The highest saturation temperature the engine solves [K]. */

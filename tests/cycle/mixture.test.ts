@@ -1,5 +1,8 @@
 // Single-stage cycles of real mixtures: every point recomputed from the mixture flashes independently of
 // the cycle code, the energy balance, glide points on the real bubble and dew points, the pure limit, CLI.
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { flashTP, getFluid, getMixture, mixtureFlash, mixtureSaturationP } from "../../src/eos/index.js";
 import { findPoint, singleStageCycle, type CycleResult } from "../../src/cycle/index.js";
@@ -82,5 +85,23 @@ describe("domeprint cycle with a real mixture", () => {
     const r = cli(["cycle", "R454B", "--evaporating", "-35C", "--condensing", "35C", "--flash-tank", "--efficiency", "0.7"]);
     expect(r.code).toBe(2);
     expect(r.err).toMatch(/a two-stage cycle is not available for real mixtures; allowed: a pure fluid or pseudo-pure blend/);
+  });
+});
+
+describe("readings against a real mixture", () => {
+  it("each reading's state is the (T, p) flash; margins from the real bubble and dew points; a warm liquid is flagged", () => {
+    const file = join(mkdtempSync(join(tmpdir(), "domeprint-readings-")), "r.csv");
+    writeFileSync(file, "name,p [bar],T [C],expect\nsuction,5.2,-4,vapour\nwarm,22,45,liquid\n");
+    const r = cli(["cycle", "R454B", "--readings", file, "--json"]);
+    expect(r.code).toBe(0);
+    const o = JSON.parse(r.out);
+    const mix = getMixture("R454B");
+    const [a, b] = o.readings;
+    expect(a.state.h).toBe(mixtureFlash(mix, { T: C(-4), p: 5.2e5 }).h);
+    const sat = mixtureSaturationP(mix, 5.2e5);
+    expect(Math.abs(a.superheat - (C(-4) - sat.dew.T))).toBeLessThan(1e-9);
+    expect(a.flags).toEqual([]);
+    expect(b.flags[0].kind).toBe("above-bubble");
+    expect(Math.abs(b.flags[0].limit - mixtureSaturationP(mix, 22e5).bubble.T)).toBeLessThan(1e-9);
   });
 });
