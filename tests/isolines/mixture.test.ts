@@ -100,3 +100,23 @@ for (const id of ["R454B", "R407C-mix"]) {
     });
   });
 }
+
+describe("pure limit of the mixture line set", () => {
+  it("R32 with a trace of R125: bubble and dew lines lie on pure R32's saturated liquid and vapour", async () => {
+    const { flashPX, getFluid } = await import("../../src/eos/index.js");
+    const set = buildLineSet("R32:0.9999999+R125:0.0000001", { reference: REF, families: { isotherms: false, isentropes: false, qualities: false, isenthalps: false, isochores: false } });
+    const r32 = getFluid("R32");
+    let n = 0;
+    for (const line of set.lines) {
+      const x = line.quantity === "saturation-liquid" ? 0 : 1;
+      for (const q of line.points) {
+        if (q[1] > 0.98 * r32.pc) continue; // the last sliver closes on each model's own critical point
+        const pure = flashPX(r32, q[1], x, REF);
+        // IIR on both: h = 200 kJ/kg and s = 1 kJ/(kg K) for the saturated liquid at 0 °C (common practice).
+        expect(Math.abs(pure.h - q[0])).toBeLessThan(0.5); // J/kg; a trace of R125 moves h by far less
+        n++;
+      }
+    }
+    expect(n).toBeGreaterThan(40);
+  }, 60_000);
+});
