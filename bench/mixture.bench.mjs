@@ -22,3 +22,12 @@ for (const id of ["R410A-mix", "R407C-mix", "R448A"]) {
   time(`${id} two-phase (p, h) flash`, 200, (i) => mixtureFlash(mix, { p, h: lo + ((i % 97) + 1) / 99 * (hi - lo) }));
   time(`${id} liquid (p, h) flash`, 200, (i) => mixtureFlash(mix, { p, h: lo - 20e3 - (i % 50) * 1e3 }));
 }
+
+// A whole line set of a mixture (default window and families, A2 frame), in CPU time: the sheet's main cost.
+const { buildLineSet } = await import("../dist/isolines/index.js");
+for (const id of ["R454B", "R407C-mix"]) {
+  const c0 = process.cpuUsage();
+  const set = buildLineSet(id, { reference: "iir" });
+  const c = process.cpuUsage(c0);
+  console.log(`${`${id} line set (${set.lines.length} lines, ${set.stats.evaluations} evaluations)`.padEnd(48)} ${((c.user + c.system) / 1e3).toFixed(0).padStart(9)} ms CPU`);
+}
