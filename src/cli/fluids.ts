@@ -39,6 +39,8 @@ export function blendSummary(m: Mixture): Record<string, unknown> {
     kind: "real mixture",
     components: m.components.map((f, k) => ({ fluid: f.id, massFraction: m.massFractions[k]!, moleFraction: m.z[k]! })),
     compositionSource: m.compositionSource,
+    safetyClass: m.safety?.class ?? null,
+    safetyClassSource: m.safety?.source ?? null,
     estimatedPairs: m.estimatedPairs,
     range: { Tmin: m.Tmin, Tmax: m.Tmax, pmax: m.pmax },
   };
@@ -70,9 +72,9 @@ Examples:
           const width = head.map((h, j) => Math.max(h.length, ...rows.map((r) => r[j]!.length)));
           const line = (r: string[]) => r.map((c, j) => (j === r.length - 1 ? c : c.padEnd(width[j]!))).join("  ");
           if (all.length) io.out([line(head), ...rows.map(line)].join("\n") + "\n\n");
-          const brows = blends.map((m) => [m.id, m.designation, `real mixture: ${compositionText(m)}`,
+          const brows = blends.map((m) => [m.id, m.designation, m.safety?.class ?? "—", `real mixture: ${compositionText(m)}`,
             m.estimatedPairs.length ? `! estimated: ${m.estimatedPairs.map((p) => p.fluids.join("/")).join(", ")}` : "published binary parameters"]);
-          const bhead = ["id", "designation", "composition (mass)", "binary parameters"];
+          const bhead = ["id", "designation", "class", "composition (mass)", "binary parameters"];
           const bwidth = bhead.map((h, j) => Math.max(h.length, ...brows.map((r) => r[j]!.length)));
           const bline = (r: string[]) => r.map((c, j) => (j === r.length - 1 ? c : c.padEnd(bwidth[j]!))).join("  ");
           io.out("Real mixtures (multi-fluid model; use the id, or a composition such as \"R32:0.5+R125:0.5\"):\n" + [bline(bhead), ...brows.map(bline)].join("\n") + "\n");

@@ -33,9 +33,9 @@ export function mixtureIdentity(mix: Mixture, reference: ReferenceName): FluidId
     designation: !mix.designation.startsWith("R-") ? mix.id : mix.id.endsWith("-mix") ? `${mix.designation} mixture` : mix.designation,
     chemicalName: names.join(" / "),
     formula: "mixture",
-    // Blend files carry no safety class; none is printed rather than one guessed.
-    safetyClass: null,
-    safetySource: "none recorded for this mixture",
+    // A standard blend's class comes from its file; a user composition has none, and none is guessed.
+    safetyClass: mix.safety?.class ?? null,
+    safetySource: mix.safety?.source ?? "no class recorded: this composition has not been classified",
     citation: `multi-fluid mixture model over the components' own equations (${mix.components.map((f) => f.id).join(", ")})`,
     equationTitle: mix.compositionSource ?? "composition as given by the user",
     validity: { Tmin: mix.Tmin, Tmax: mix.Tmax, pmax: mix.pmax },

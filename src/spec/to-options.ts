@@ -3,7 +3,7 @@
 import { existsSync } from "node:fs";
 import { dirname, isAbsolute, normalize, resolve, sep } from "node:path";
 import { DomeprintError, show } from "../errors.js";
-import { flashTP, getFluid, resolveFluidId, type Fluid, type ReferenceName } from "../eos/index.js";
+import { flashTP, resolveSubstance, type Fluid, type ReferenceName, type Substance } from "../eos/index.js";
 import { cycleOverlay } from "../cycle/index.js";
 import type { Overlay } from "../cycle/overlay.js";
 import { runCycle } from "../cli/cycle.js";
@@ -11,6 +11,7 @@ import { checkPressureUnit } from "../layout/display-units.js";
 import { resolvePaper } from "../layout/paper.js";
 import { loadStyle } from "../layout/style-file.js";
 import { checkDate, checkFormats, defaultReference, type SheetLineOptions, type SheetOptions } from "../sheet/index.js";
+import { mixtureDefaultReference } from "../sheet/mixture-content.js";
 import { atmosphereAt, parseQuantity, type Quantity } from "../units/index.js";
 import type { LoadedSpec } from "./load.js";
 import { specError } from "./load.js";
@@ -71,8 +72,10 @@ function enthalpyRange(f: Fluid, ref: ReferenceName): [number, number] {
   return [liquid.h, vapour.h];
 }
 
-function windowOf(file: string, path: string, e: SheetEntry, f: Fluid, ref: ReferenceName, atmosphere: number): NonNullable<SheetLineOptions["window"]> {
+function windowOf(file: string, path: string, e: SheetEntry, sub: Substance, ref: ReferenceName, atmosphere: number): NonNullable<SheetLineOptions["window"]> {
   const w = e.window!;
+  // A mixture's range is its components' narrowest; its enthalpy range is checked when its lines are traced.
+  const f = sub.kind === "pure" ? sub.fluid : { id: sub.mixture.id, pmax: sub.mixture.pmax } as Fluid;
   const out: Record<string, number> = {};
   for (const key of ["pMin", "pMax"] as const) {
     const v = w[key];
@@ -82,7 +85,7 @@ function windowOf(file: string, path: string, e: SheetEntry, f: Fluid, ref: Refe
       throw specError(file, `${pre(path)}window.${key}`, `${show(v)}: outside the equation's range of ${f.id}`, v, `above 0 and at most ${f.pmax / 1e5} bar`);
     out[key] = p;
   }
-  const [hLow, hHigh] = enthalpyRange(f, ref);
+  const [hLow, hHigh] = sub.kind === "pure" ? enthalpyRange(sub.fluid, ref) : [-Infinity, Infinity];
   for (const key of ["hMin", "hMax"] as const) {
     const v = w[key];
     if (v === undefined) continue;
@@ -147,22 +150,23 @@ export function planSheets(spec: LoadedSpec): PlannedSheet[] {
     const path = spec.single ? "" : `sheets[${i}]`;
     const e = merge(spec.defaults, entry);
     if (!e.fluid) throw specError(file, `${pre(path)}fluid`, "missing", undefined, "a fluid id, R-number or chemical name (e.g. fluid: R134a)");
-    const fluidId = at(file, `${pre(path)}fluid`, () => resolveFluidId(e.fluid!));
-    const f = getFluid(fluidId);
+    // Pure and pseudo-pure fluids first, then real blends and compositions ("R32:0.5+R125:0.5").
+    const sub = at(file, `${pre(path)}fluid`, () => resolveSubstance(e.fluid!));
+    const fluidId = sub.kind === "pure" ? sub.fluid.id : e.fluid!.trim();
     if (e.paper !== undefined) at(file, `${pre(path)}paper`, () => resolvePaper(e.paper!, e.orientation));
     if (e.style !== undefined) at(file, `${pre(path)}style`, () => loadStyle(e.style!));
     const pressure = e.pressure === undefined ? undefined : at(file, `${pre(path)}pressure`, () => checkPressureUnit(e.pressure));
     const altitude = e.altitude === undefined ? undefined : at(file, `${pre(path)}altitude`, () => q("altitude", "length", e.altitude!, "m"));
     if (altitude !== undefined && (altitude < -500 || altitude > 9000)) throw specError(file, `${pre(path)}altitude`, `${show(e.altitude)}: outside the troposphere the standard atmosphere covers here`, e.altitude, "−500 m to 9000 m");
     const atmosphere = atmosphereAt(altitude ?? 0);
-    const ref = (e.reference ?? defaultReference(f)) as ReferenceName;
+    const ref = (e.reference ?? (sub.kind === "pure" ? defaultReference(sub.fluid) : mixtureDefaultReference(sub.mixture))) as ReferenceName;
     const formats = e.formats === undefined ? undefined : at(file, `${pre(path)}formats`, () => checkFormats(Array.isArray(e.formats) ? e.formats : e.formats));
     const units = e.units ?? "si";
     if (e.date !== undefined) at(file, `${pre(path)}date`, () => checkDate(e.date));
     if (e.dpi !== undefined && !(Number.isFinite(e.dpi) && e.dpi >= 10 && e.dpi <= 2400))
       throw specError(file, `${pre(path)}dpi`, `${show(e.dpi)}: not a usable resolution`, e.dpi, "10 to 2400 dots per inch");
     const lineOptions = {
-      ...(e.window ? { window: windowOf(file, path, e, f, ref, atmosphere) } : {}),
+      ...(e.window ? { window: windowOf(file, path, e, sub, ref, atmosphere) } : {}),
       ...(e.lines ? linesOf(file, path, e) : {}),
     };
     const overlays = (e.cycles ?? []).map((c, k) => cycleOf(file, `${pre(path)}cycles[${k}]`, c, fluidId, ref, units, atmosphere));

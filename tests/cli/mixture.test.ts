@@ -71,8 +71,9 @@ describe("domeprint props with a real mixture", () => {
 describe("domeprint fluids lists the real mixtures", () => {
   it("table: blends marked as real mixtures with composition and estimated pairs", () => {
     const out = cli(["fluids"]).out;
-    expect(out).toMatch(/R454B\s+R-454B\s+real mixture: R32 68\.9 % \+ R1234yf 31\.1 %/); // ASHRAE 34 nominal composition (from memory)
-    expect(out).toMatch(/R410A-mix\s+R-410A\s+real mixture: R32 50 % \+ R125 50 %\s+! estimated: R32\/R125/);
+    // ASHRAE 34 nominal composition and ISO 817 class (from memory)
+    expect(out).toMatch(/R454B\s+R-454B\s+A2L\s+real mixture: R32 68\.9 % \+ R1234yf 31\.1 %/);
+    expect(out).toMatch(/R410A-mix\s+R-410A\s+A1\s+real mixture: R32 50 % \+ R125 50 %\s+! estimated: R32\/R125/);
   });
   it("--mixtures --json: each blend with components, fractions summing to one, and its estimated pairs", () => {
     const list = JSON.parse(cli(["fluids", "--mixtures", "--json"]).out);

@@ -111,3 +111,23 @@ describe("domeprint build", () => {
     expect(readFileSync(join(dir, "a", "r.svg"), "utf8")).toContain("Tom &amp; Jerry&apos;s &lt;unit&gt; Ø±ΔТ");
   }, 240_000);
 });
+
+describe("specs with real mixtures", () => {
+  it("a blend id and a composition string both build, with the blend's safety class and a design cycle", async () => {
+    const { buildText } = await import("../../src/spec/index.js");
+    const dir = tmp();
+    const text = `defaults: { paper: A4, formats: [svg], date: 2026-12-01 }
+sheets:
+  - fluid: R454B
+    name: r454b
+    cycles: [{ evaporating: -10C, condensing: 40C, superheat: 5K, subcooling: 3K, efficiency: 0.7 }]
+  - { fluid: "R32:0.7+R1234yf:0.3", name: custom }
+`;
+    const r = await buildText("m.yaml", text, { outDir: dir, jobs: 1 });
+    expect(r.failed).toBe(0);
+    const svg = readFileSync(join(dir, "r454b.svg"), "utf8");
+    expect(svg).toContain("R-454B");
+    expect(svg).toContain("A2L"); // ISO 817 class of R-454B (from memory, recorded in its blend file)
+    expect(readFileSync(join(dir, "custom.svg"), "utf8")).toContain("R32 70 %");
+  }, 240_000);
+});

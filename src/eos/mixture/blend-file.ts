@@ -17,6 +17,8 @@ export const blendFileSchema = z.strictObject({
   /** Components by fluid id with their mass fractions, in the order they are designated. */
   components: z.array(z.strictObject({ fluid: z.string(), massFraction: frac })).min(2),
   compositionSource: z.string(),
+  /** ISO 817 safety class of the standard blend, with where the value came from. */
+  safety: z.strictObject({ class: z.string(), source: z.string() }).optional(),
   note: z.string().optional(),
 }).superRefine((b, ctx) => {
   const sum = b.components.reduce((s, c) => s + c.massFraction, 0);

@@ -29,6 +29,8 @@ export class Mixture {
   readonly estimatedPairs: readonly EstimatedPair[];
   /** Where the standard composition comes from (blend files), or null for a composition given by the user. */
   readonly compositionSource: string | null;
+  /** ISO 817 class of a standard blend and its source; null for a user composition, which nobody has classified. */
+  safety: { class: string; source: string } | null = null;
   /** Range of the model: the narrowest of the components' ranges. */
   readonly Tmin: number;
   readonly Tmax: number;
@@ -133,6 +135,7 @@ export function getMixture(spec: string): Mixture {
     const b = findBlend(key);
     if (!b) throw new DomeprintError("E_UNKNOWN_FLUID", `fluid = ${JSON.stringify(spec)}: unknown blend; allowed: ${blendIds().join(", ")} or a composition such as "R32:0.5+R125:0.5"`, { input: "fluid", value: spec, allowed: blendIds().join(", ") });
     m = new Mixture(b.id, b.designation, b.components.map((c) => getFluid(c.fluid)), b.components.map((c) => c.massFraction), b.compositionSource);
+    m.safety = b.safety ?? null;
   }
   cache.set(key, m);
   return m;
