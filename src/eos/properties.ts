@@ -24,9 +24,16 @@ export function propertiesTRho(m: Helmholtz, M: number, T: number, rho: number, 
   const tau = m.Tr / T, delta = rho / m.rhor;
   m.evalResidual(tau, delta);
   m.evalIdeal(tau);
-  const r = m.r, i = m.i, R = m.R;
+  writeProperties(m.r, m.i[0]! + Math.log(delta), m.i[1]!, m.i[2]!, m.R, M, T, rho, out);
+}
+
+/**
+ * The property set from the scaled residual derivatives r (see terms/kernel.ts), the ideal part
+ * α⁰ (ln δ included), τα⁰_τ, τ²α⁰_ττ, the gas constant R, molar mass M [kg/mol], T [K] and molar ρ.
+ * Shared by pure fluids and mixtures, so both use one set of relations (SCHEMA.md).
+ */
+export function writeProperties(r: Float64Array, a0: number, ta0: number, tta0: number, R: number, M: number, T: number, rho: number, out: Float64Array): void {
   const ar = r[0]!, dar = r[1]!, tar = r[2]!, ddar = r[3]!, ttar = r[4]!, dtar = r[5]!;
-  const a0 = i[0]! + Math.log(delta), ta0 = i[1]!, tta0 = i[2]!;
   const RT = R * T;
   const num = 1 + dar - dtar;
   const den = 1 + 2 * dar + ddar;
