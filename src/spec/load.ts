@@ -62,7 +62,7 @@ function checkEntry(file: string, prefix: string, raw: unknown): SheetEntry {
     const list = known(issue.path);
     const hint = didYouMean(key, list);
     return (() => {
-      throw specError(file, joinPath(prefix, [...issue.path, key]), `unknown key${hint ? `; did you mean "${hint}"?` : ""} Allowed keys here: ${list.join(", ")}`, key, list.join(", "), hint ? [hint] : []);
+      throw specError(file, joinPath(prefix, [...issue.path, key]), `unknown key${hint ? `; did you mean "${hint}"?` : ""}; allowed keys here: ${list.join(", ")}`, key, list.join(", "), hint ? [hint] : []);
     })();
   }
   const value = valueAt(raw, issue.path);
@@ -87,7 +87,7 @@ export function parseSpec(file: string, source: string): LoadedSpec {
     for (const k of Object.keys(top)) {
       if (k !== "sheets" && k !== "defaults") {
         const hint = didYouMean(k, ["sheets", "defaults"]);
-        throw specError(file, k, `unknown key next to "sheets"${hint ? `; did you mean "${hint}"?` : ""} Allowed keys here: sheets, defaults (sheet keys go inside each sheet or defaults)`, k, "sheets, defaults", hint ? [hint] : []);
+        throw specError(file, k, `unknown key next to "sheets"${hint ? `; did you mean "${hint}"?` : ""}; allowed keys here: sheets, defaults (sheet keys go inside each sheet or defaults)`, k, "sheets, defaults", hint ? [hint] : []);
       }
     }
     if (!Array.isArray(top.sheets) || top.sheets.length === 0) throw specError(file, "sheets", `${show(top.sheets)}: not a list of sheets`, top.sheets, "a list with at least one sheet");
