@@ -1,6 +1,7 @@
 // Scene → SVG: one editor layer per scene layer, real <text> with halos, data-* attributes, clip paths,
 // bleed and crop marks, in millimetres; the same scene always gives the same bytes.
 
+import { line } from "d3-shape";
 import { createRequire } from "node:module";
 import type svgBuilderModule from "svg-builder";
 import type { SVGBuilderInstance } from "svg-builder";
@@ -60,10 +61,14 @@ function fillAttributes(fill: Fill | undefined): Attributes {
   return { fill: fill.colour, "fill-opacity": fill.opacity === undefined ? undefined : String(fill.opacity) };
 }
 
+/** Path data through d3-shape's line builder, coordinates to 0.001 mm like every other number in the file. */
+const round3 = (v: number) => Math.round(v * 1000) / 1000;
+const polyline = line<[number, number]>().x((p) => round3(p[0])).y((p) => round3(p[1]));
+
 function pathData(points: number[], closed = false): string {
-  const pairs: string[] = [];
-  for (let i = 0; i < points.length; i += 2) pairs.push(`${mm(points[i]!)} ${mm(points[i + 1]!)}`);
-  return `M${pairs[0]}L${pairs.slice(1).join(" ")}${closed ? "Z" : ""}`;
+  const pairs: [number, number][] = [];
+  for (let i = 0; i < points.length; i += 2) pairs.push([points[i]!, points[i + 1]!]);
+  return `${polyline(pairs) ?? ""}${closed ? "Z" : ""}`;
 }
 
 function clipId(id: string): string {

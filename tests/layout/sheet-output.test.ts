@@ -35,7 +35,8 @@ function invert(axis: Axis, at: number): number {
 }
 
 function pathPoints(d: string): [number, number][] {
-  return [...d.matchAll(/[ML]?(-?[\d.]+) (-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+  // SVG path data: M or L, then x and y separated by a comma or a space (d3-shape writes commas).
+  return [...d.matchAll(/[ML]?(-?[\d.]+)[ ,](-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
 }
 
 describe("R-134a sheet, A4 landscape, as SVG", async () => {

@@ -92,7 +92,7 @@ describe("renderSvg", () => {
 
   it("rounds every coordinate to 0.001 mm", () => {
     const odd: Scene = { ...scene, layers: [{ id: "l", label: "L", marks: [{ kind: "path", points: [1 / 3, 2 / 3, 10.0004999, -0.0001], stroke: { colour: "#000000", width: 0.3 } }] }] };
-    expect(all(parse(renderSvg(odd)), "path")[0]!.getAttribute("d")).toBe("M0.333 0.667L10 0");
+    expect(all(parse(renderSvg(odd)), "path")[0]!.getAttribute("d")).toBe("M0.333,0.667L10,0");
   });
 
   it("is byte-identical when rendered twice", () => {
