@@ -40,10 +40,12 @@ export interface Helmholtz {
   readonly R: number;
   /** Residual part after evalResidual: αʳ, δαʳ_δ, τααʳ_τ, δ²αʳ_δδ, τ²αʳ_ττ, δταʳ_δτ. */
   readonly r: Float64Array;
-  /** Ideal part after evalIdeal (without ln δ): α⁰, τα⁰_τ, τ²α⁰_ττ. */
+  /** Ideal part after evalIdeal (without ln δ): α⁰, τα⁰_τ, τ²α⁰_ττ; slot 3 holds ln δ after evalAll. */
   readonly i: Float64Array;
   evalResidual(tau: number, delta: number): void;
   evalIdeal(tau: number): void;
+  /** Both parts at once, with ln τ and ln δ taken once (the full property set needs both). */
+  evalAll(tau: number, delta: number): void;
 }
 
 /**
@@ -67,9 +69,18 @@ export function buildHelmholtz(f: FluidFile): Helmholtz {
   const residual = f.residual.map(residualKernel);
   const ideal = f.ideal.map((t) => idealKernel(t, Tr));
   const r = new Float64Array(6);
-  const i = new Float64Array(3);
+  const i = new Float64Array(4);
   const evalResidual = chain(residual.map((k) => k.add), r, ["tau", "delta"], "const lnTau = Math.log(tau), lnDelta = Math.log(delta);", ["tau", "delta", "lnTau", "lnDelta"]);
-  const evalIdeal = chain(ideal.map((k) => k.add), i, ["tau"], "const lnTau = Math.log(tau);", ["tau", "lnTau"]);
+  const evalIdeal = chain(ideal.map((k) => k.add), i.subarray(0, 3), ["tau"], "const lnTau = Math.log(tau);", ["tau", "lnTau"]);
+  const rn = residual.map((_, k) => `r${k}`), idn = ideal.map((_, k) => `i${k}`);
+  const evalAll = new Function("rf", "idf", "r", "i", `const [${rn.join(", ")}] = rf, [${idn.join(", ")}] = idf;
+return function (tau, delta) {
+  r[0] = 0; r[1] = 0; r[2] = 0; r[3] = 0; r[4] = 0; r[5] = 0; i[0] = 0; i[1] = 0; i[2] = 0;
+  const lnTau = Math.log(tau), lnDelta = Math.log(delta);
+  i[3] = lnDelta;
+  ${rn.map((n) => `${n}(tau, delta, lnTau, lnDelta, r);`).join(" ")}
+  ${idn.map((n) => `${n}(tau, lnTau, i);`).join(" ")}
+};`)(residual.map((k) => k.add), ideal.map((k) => k.add), r, i) as (tau: number, delta: number) => void;
   return {
     Tr,
     rhor: f.reducing.rho,
@@ -78,5 +89,6 @@ export function buildHelmholtz(f: FluidFile): Helmholtz {
     i,
     evalResidual,
     evalIdeal,
+    evalAll,
   };
 }

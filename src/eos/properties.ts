@@ -22,9 +22,8 @@ export function pressureAndSlope(m: Helmholtz, T: number, rho: number, out: Floa
 /** The full property set at T [K] and molar density ρ [mol/m³]; M is the molar mass [kg/mol]. */
 export function propertiesTRho(m: Helmholtz, M: number, T: number, rho: number, out: Float64Array): void {
   const tau = m.Tr / T, delta = rho / m.rhor;
-  m.evalResidual(tau, delta);
-  m.evalIdeal(tau);
-  writeProperties(m.r, m.i[0]! + Math.log(delta), m.i[1]!, m.i[2]!, m.R, M, T, rho, out);
+  m.evalAll(tau, delta);
+  writeProperties(m.r, m.i[0]! + m.i[3]!, m.i[1]!, m.i[2]!, m.R, M, T, rho, out);
 }
 
 /**

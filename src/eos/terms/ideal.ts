@@ -1,6 +1,7 @@
 // Ideal-gas term forms of α⁰(τ): constants, ln τ, powers of τ, Planck–Einstein terms and c_p⁰ polynomials.
 // Each returns α⁰, τα⁰_τ and τ²α⁰_ττ; the ln δ of the lead term is added once by the model.
 import { columns, I_A, I_T, I_TT, type IdealKernel } from "./kernel.js";
+import { lit, powerStatements } from "./codegen.js";
 
 /** a1 + a2·τ (the lead term's constants and the reference-state offsets). */
 export function linearTau(a1: number, a2: number): IdealKernel {
@@ -23,38 +24,33 @@ export function logTau(a: number): IdealKernel {
   };
 }
 
-/** Σ n τ^t. */
+/** Σ n τ^t, compiled: exponents that are multiples of 1/8 come by multiplication and square roots. */
 export function tauPower(rows: number[][], names: string[]): IdealKernel {
   const [n, t] = columns(rows, names, ["n", "t"]) as [Float64Array, Float64Array];
-  return {
-    add(_tau, lnTau, acc) {
-      for (let i = 0; i < n.length; i++) {
-        const ti = t[i]!;
-        const u = n[i]! * Math.exp(ti * lnTau);
-        acc[I_A]! += u;
-        acc[I_T]! += ti * u;
-        acc[I_TT]! += ti * (ti - 1) * u;
-      }
-    },
-  };
+  const pw = powerStatements("tau", "lnTau", "P", Array.from(t));
+  const body = [...pw.code, "let a = 0, aT = 0, aTT = 0;"];
+  for (let k = 0; k < n.length; k++) {
+    const tk = t[k]!;
+    body.push(`{ const u = ${lit(n[k]!)} * ${pw.expr.get(tk)}; a += u; aT += ${lit(tk)} * u; aTT += ${lit(tk * (tk - 1))} * u; }`);
+  }
+  body.push(`acc[${I_A}] += a; acc[${I_T}] += aT; acc[${I_TT}] += aTT;`);
+  return { add: new Function("tau", "lnTau", "acc", body.join("\n")) as IdealKernel["add"] };
 }
 
-/** Σ n ln(1 − exp(−θτ)); `scale` turns θ given in kelvin into a reduced θ (θ/T_r). */
+/**
+ * Σ n ln(1 − exp(−θτ)); `scale` turns θ given in kelvin into a reduced θ (θ/T_r). Compiled to straight-line
+ * code, one exp and one log1p per term, as the residual tables are.
+ */
 export function planckEinstein(rows: number[][], names: string[], thetaColumn: string, scale = 1): IdealKernel {
   const [n, th] = columns(rows, names, ["n", thetaColumn]) as [Float64Array, Float64Array];
-  const theta = th.map((x) => x * scale);
-  return {
-    add(tau, _lnTau, acc) {
-      for (let i = 0; i < n.length; i++) {
-        const ni = n[i]!, thi = theta[i]!;
-        const e = Math.exp(-thi * tau);
-        const om = 1 - e;
-        acc[I_A]! += ni * Math.log(om);
-        acc[I_T]! += (ni * thi * tau * e) / om;
-        acc[I_TT]! -= (ni * thi * thi * tau * tau * e) / (om * om);
-      }
-    },
-  };
+  const body: string[] = ["let a = 0, aT = 0, aTT = 0;"];
+  for (let k = 0; k < n.length; k++) {
+    const nk = n[k]!, tk = th[k]! * scale;
+    body.push(`{ const x = ${tk} * tau, e = Math.exp(-x), om = 1 - e;`
+      + ` a += ${nk} * Math.log1p(-e); aT += ${nk} * x * e / om; aTT -= ${nk} * x * x * e / (om * om); }`);
+  }
+  body.push(`acc[${I_A}] += a; acc[${I_T}] += aT; acc[${I_TT}] += aTT;`);
+  return { add: new Function("tau", "lnTau", "acc", body.join("\n")) as IdealKernel["add"] };
 }
 
 /** Σ n ln(c + d·exp(θτ)). */

@@ -20,25 +20,36 @@ export function nonanalyticTerms(rows: number[][], names: string[]): ResidualKer
       const d2 = dm1 * dm1;
       let f = 0, fD = 0, fT = 0, fDD = 0, fTT = 0, fDT = 0;
       // Powers of (δ−1)² shared by terms with the same β or a: one pow per distinct exponent per call.
+      // Each term carries ψ = exp(−C(δ−1)² − D(τ−1)²); where that exponent passes 50 the term is below
+      // 1e-21 of its size near the critical point, far under rounding, and is skipped with its powers.
+      let lastDelta = NaN, lastLnDelta = 0, lastPsiArg = NaN, lastPsi = 0;
+      let active = false;
+      for (let i = 0; i < count; i++) if (C[i]! * d2 + D[i]! * tm1 * tm1 < 50) active = true;
+      if (!active) return;
       // exp(k·ln x) is several times faster than Math.pow in V8 and as exact for these arguments.
       const lnD2 = Math.log(d2);
       for (let j = 0; j < betaSet.length; j++) pBeta[j] = Math.exp((1 / (2 * betaSet[j]!) - 1) * lnD2);
       for (let j = 0; j < aSet.length; j++) pA[j] = Math.exp((aSet[j]! - 1) * lnD2);
       for (let i = 0; i < count; i++) {
         const ai = a[i]!, bi = b[i]!, bei = beta[i]!, Ai = A[i]!, Bi = B[i]!, Ci = C[i]!, Di = D[i]!;
+        if (Ci * d2 + Di * tm1 * tm1 >= 50) continue;
         const p1 = pBeta[betaIdx[i]!]!; // ((δ−1)²)^(1/(2β) − 1)
         const theta = 1 - tau + Ai * p1 * d2;
         const pa1 = pA[aIdx[i]!]!; // ((δ−1)²)^(a − 1)
         let Delta = theta * theta + Bi * pa1 * d2;
         if (Delta < 1e-300) Delta = 1e-300;
-        const psi = Math.exp(-Ci * d2 - Di * tm1 * tm1);
+        // Terms often share Δ (same a, β, A, B) or ψ (same C, D): their logs and exps are taken once.
+        if (Delta !== lastDelta) { lastDelta = Delta; lastLnDelta = Math.log(Delta); }
+        const psiArg = -Ci * d2 - Di * tm1 * tm1;
+        if (psiArg !== lastPsiArg) { lastPsiArg = psiArg; lastPsi = Math.exp(psiArg); }
+        const psi = lastPsi;
         // Δ and its derivatives; (1/(δ−1))·∂Δ/∂δ is kept as `r` to avoid a 0/0 at δ = 1.
         const r = Ai * theta * (2 / bei) * p1 + 2 * Bi * ai * pa1;
         const dDelta = dm1 * r;
         const ddDelta = r + d2 * (4 * Bi * ai * (ai - 1) * (pa1 / d2)
           + 2 * Ai * Ai * (1 / (bei * bei)) * p1 * p1
           + Ai * theta * (4 / bei) * (1 / (2 * bei) - 1) * (p1 / d2));
-        const Db = Math.exp(bi * Math.log(Delta));
+        const Db = Math.exp(bi * lastLnDelta);
         const Db1 = Db / Delta; // Δ^(b−1)
         const Db2 = Db1 / Delta; // Δ^(b−2)
         const dDb = bi * Db1 * dDelta;
