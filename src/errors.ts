@@ -70,3 +70,13 @@ export function requireNumber(input: string, value: unknown, opts: { positive?: 
   if (!opts.allowNegative && !opts.positive && value < 0) throw inputError(input, value, "must not be negative", "a number ≥ 0");
   return value;
 }
+
+/** Runs fn; a typed DomeprintError becomes undefined (a state the caller may do without), anything else is rethrown. */
+export function attempt<T>(fn: () => T): T | undefined {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof DomeprintError) return undefined;
+    throw e;
+  }
+}

@@ -1,7 +1,7 @@
 // What every line of one line-set build shares: the fluid, its reference offsets, the page mapping and
 // tolerance, scratch space for explicit (T, ρ) evaluations, and the counters of the trace.
 import { type Fluid, type ReferenceName, type ReferenceOffset, H, P, propertiesTRho, PROP_SLOTS, referenceOffset } from "../eos/index.js";
-import { DomeprintError } from "../errors.js";
+import { attempt as tryTyped } from "../errors.js";
 import type { PageMapping } from "./page.js";
 import type { TraceSettings } from "./trace.js";
 import type { Point, TraceStats } from "./types.js";
@@ -44,11 +44,7 @@ export function pointTRho(ctx: Context, T: number, rho: number): Point | null {
 }
 
 /** Runs an engine call, turning its typed errors into "not defined here"; anything else is a bug and propagates. */
+/** The shared attempt (src/errors.ts), with null for "no state here" as the tracer's callers expect. */
 export function attempt<T>(fn: () => T): T | null {
-  try {
-    return fn();
-  } catch (e) {
-    if (e instanceof DomeprintError) return null;
-    throw e;
-  }
+  return tryTyped(fn) ?? null;
 }

@@ -35,13 +35,16 @@ export function autoWindow(f: Fluid, reference: ReferenceName, units: UnitSystem
   const hHot = flashTP(f, hotTemperature(f), pMin, reference).h;
   // Room for subcooled liquid colder than the window's floor, unless the floor is the triple point.
   const margin = Tlow > f.Tmin ? 0.03 * (hHot - hCold) : 0;
-  const lo = toDisplay(units, "enthalpy", hCold - margin), hi = toDisplay(units, "enthalpy", hHot);
+  return { ...roundEnthalpyWindow(units, hCold - margin, hHot), pMin, pMax };
+}
+
+/** The window's h limits [J/kg] widened to round values of the display unit (a 1–2–5 step of about 1/40 of the span). */
+export function roundEnthalpyWindow(units: UnitSystem, hLow: number, hHigh: number): { hMin: number; hMax: number } {
+  const lo = toDisplay(units, "enthalpy", hLow), hi = toDisplay(units, "enthalpy", hHigh);
   const step = niceAtLeast((hi - lo) / 40, ONE_TWO_FIVE);
   return {
     hMin: fromDisplay(units, "enthalpy", clean(Math.floor(lo / step) * step)),
     hMax: fromDisplay(units, "enthalpy", clean(Math.ceil(hi / step) * step)),
-    pMin,
-    pMax,
   };
 }
 

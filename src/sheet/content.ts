@@ -6,7 +6,7 @@ import {
   availableReferences, H, propertiesTRho, PROP_SLOTS, REFERENCE_DESCRIPTIONS, referenceOffset, S, saturationP, saturationT,
   type Fluid, type ReferenceName,
 } from "../eos/index.js";
-import { DomeprintError } from "../errors.js";
+import { attempt } from "../errors.js";
 import { buildLineSet } from "../isolines/index.js";
 import type { LineSet } from "../isolines/index.js";
 import type { FluidIdentity, SaturationRow, SaturationTick } from "../layout/content.js";
@@ -65,15 +65,6 @@ export function saturationTicks(f: Fluid, lines: LineSet, units: DisplayUnits): 
     if (sat) out.push({ t, pBubble: sat.pL, pDew: sat.pV });
   }
   return out;
-}
-
-function attempt<T>(fn: () => T): T | undefined {
-  try {
-    return fn();
-  } catch (e) {
-    if (e instanceof DomeprintError) return undefined;
-    throw e;
-  }
 }
 
 /** The saturation temperature at the window's lowest pressure (the dew temperature for blends), or T_min. */

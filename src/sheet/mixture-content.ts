@@ -1,7 +1,7 @@
 // A real mixture's share of a sheet's data, gathered here so the layout never calls the engine: its identity
 // (composition and estimated pairs for the title block), bubble and dew pressures at whole degrees, the table.
 import { mixtureReferenceOffset, mixtureSaturationT, REFERENCE_DESCRIPTIONS, type Mixture, type ReferenceName } from "../eos/index.js";
-import { DomeprintError } from "../errors.js";
+import { attempt } from "../errors.js";
 import { buildLineSet, type LineSet } from "../isolines/index.js";
 import type { FluidIdentity, SaturationRow, SaturationTick } from "../layout/content.js";
 import { toDisplay, type DisplayUnits } from "../layout/display-units.js";
@@ -9,15 +9,6 @@ import { toSI } from "../units/index.js";
 import type { SheetLineOptions } from "./options.js";
 
 const REFERENCE_NAMES: Record<ReferenceName, string> = { native: "as published", iir: "IIR", ashrae: "ASHRAE", nbp: "NBP" };
-
-function attempt<T>(fn: () => T): T | undefined {
-  try {
-    return fn();
-  } catch (e) {
-    if (e instanceof DomeprintError) return undefined;
-    throw e;
-  }
-}
 
 /** IIR where the mixture's bubble-point liquid at 0 °C exists, else the model's own: the refrigeration habit. */
 export function mixtureDefaultReference(mix: Mixture): ReferenceName {

@@ -4,8 +4,9 @@ import { H, P, mixtureFlash, mixtureReferenceOffset, mixtureSaturationT, type Mi
 import { mixtureDensityTP, mixturePropertiesTRho } from "../../eos/mixture/index.js";
 import { inputError } from "../../errors.js";
 import { attempt } from "../context.js";
+import { roundEnthalpyWindow } from "../window.js";
 import { displayUnit, fromDisplay, SI_UNIT, toDisplay } from "../display.js";
-import { clean, multiplesBetween, niceAtLeast, niceAtMost, ONE_TWO_FIVE, stepFor, WINDOW_MANTISSAS } from "../nice.js";
+import { multiplesBetween, niceAtLeast, niceAtMost, stepFor, WINDOW_MANTISSAS } from "../nice.js";
 import type { CheckedOptions } from "../options.js";
 import { pageMapping, type PageMapping } from "../page.js";
 import { joinParts, traceCurve, type TraceSettings } from "../trace.js";
@@ -49,14 +50,7 @@ export function mixtureAutoWindow(mix: Mixture, ref: ReferenceName, units: UnitS
   const hCold = sat.bubble.h;
   const hHot = mixtureFlash(mix, { T: Math.min(mix.Tmax, 1.3 * env.critical.T), p: pMin }, ref).h;
   const margin = 0.03 * (hHot - hCold);
-  const lo = toDisplay(units, "enthalpy", hCold - margin), hi = toDisplay(units, "enthalpy", hHot);
-  const step = niceAtLeast((hi - lo) / 40, ONE_TWO_FIVE);
-  return {
-    hMin: fromDisplay(units, "enthalpy", clean(Math.floor(lo / step) * step)),
-    hMax: fromDisplay(units, "enthalpy", clean(Math.ceil(hi / step) * step)),
-    pMin,
-    pMax,
-  };
+  return { ...roundEnthalpyWindow(units, hCold - margin, hHot), pMin, pMax };
 }
 
 function resolveMixtureWindow(auto: ChartWindow, o: Partial<ChartWindow> | undefined, mix: Mixture): ChartWindow {
