@@ -1,19 +1,9 @@
 // Cycle benchmark (run against dist/ after `npm run build`): ms per cycle for each model, including
 // its drawn path, and for the transcritical high-pressure search, in process CPU time, best of 3.
+import { cpuTimePerCall } from "./clock.mjs";
 import { optimiseHighPressure, singleStageCycle, transcriticalCycle, twoStageCycle, cycleOverlay, parseReadings, evaluateReadings } from "../dist/cycle/index.js";
 
-/** ms per call of fn in this process's CPU time (steadier than wall time on a shared machine); best of 3 runs. */
-function time(fn, minMs = 300) {
-  fn();
-  let best = Infinity;
-  for (let rep = 0; rep < 3; rep++) {
-    let n = 0, used = 0;
-    const c0 = process.cpuUsage();
-    while (used < minMs * 1000) { fn(); n++; const c = process.cpuUsage(c0); used = c.user + c.system; }
-    best = Math.min(best, used / 1000 / n);
-  }
-  return best;
-}
+const time = (fn) => cpuTimePerCall(fn, { minMs: 300 });
 
 const C = (t) => t + 273.15;
 const readings = "name,p [bar],T [C],expect\n" + Array.from({ length: 100 }, (_, i) => `r${i},${2 + i * 0.1},${10 + i * 0.5},vapour`).join("\n");

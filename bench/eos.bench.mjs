@@ -1,22 +1,11 @@
 // Property-engine benchmark (run against dist/ after `npm run build`): ns per full property set at (T, ρ),
 // µs per saturation at T and per (p, h) and (p, s) flash, after warm-up, over varied states (process CPU time).
+import { cpuTimePerCall } from "./clock.mjs";
 import { getFluid, propertiesTRho, PROP_SLOTS, saturationT, flashTP, flashPH, flashPS } from "../dist/eos/index.js";
 
 const FLUIDS = ["water", "co2", "R134a", "propane", "ammonia", "R410A"];
 
-/** ms per call of fn, in this process's CPU time (steadier than wall time on a shared machine); best of 3 runs. */
-function time(fn, minMs = 200) {
-  fn(); // warm-up and JIT
-  let best = Infinity;
-  for (let rep = 0; rep < 3; rep++) {
-    let n = 0;
-    const c0 = process.cpuUsage();
-    let used = 0;
-    while (used < minMs * 1000) { fn(); n++; const c = process.cpuUsage(c0); used = c.user + c.system; }
-    best = Math.min(best, used / 1000 / n);
-  }
-  return best;
-}
+const time = (fn) => cpuTimePerCall(fn);
 
 const rows = [];
 for (const id of FLUIDS) {
@@ -29,8 +18,9 @@ for (const id of FLUIDS) {
     try { states.push(flashTP(f, T, p)); } catch { /* outside the range: skipped */ }
   }
   const out = new Float64Array(PROP_SLOTS);
-  const TR = states.map((s) => [s.T, s.rho / f.M]);
-  const props = time(() => { for (const [T, r] of TR) propertiesTRho(f.model, f.M, T, r, out); }) / TR.length;
+  const Ts0 = Float64Array.from(states, (s) => s.T), rhos = Float64Array.from(states, (s) => s.rho / f.M);
+  const m = f.model, M = f.M, count = states.length;
+  const props = time(() => { for (let k = 0; k < count; k++) propertiesTRho(m, M, Ts0[k], rhos[k], out); }) / count;
   const Ts = Array.from({ length: 32 }, (_, i) => f.Tmin + (f.satTmax - 1 - f.Tmin) * i / 31);
   const sat = time(() => { for (const T of Ts) saturationT(f, T); }) / Ts.length;
   const ph = time(() => { for (const s of states) flashPH(f, s.p, s.h); }) / states.length;

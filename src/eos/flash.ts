@@ -65,7 +65,7 @@ type Target = "h" | "s";
  * `branchAt` picks the density root for each trial temperature; `capRho` bounds the vapour root.
  */
 function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: number, Thi: number, T0: number,
-  branchAt: (T: number) => Branch, rho0?: number, capRho?: number, atLow: "triple" | "boundary" = "boundary", leastAt?: (T: number) => number): { T: number; rho: number } {
+  branchAt: (T: number) => Branch, rho0?: number, capRho?: number, atLow: "triple" | "boundary" = "boundary", leastAt?: (T: number) => number): { T: number; rho: number; evaluated: boolean } {
   const o = f.tmp;
   let lo = Tlo, hi = Thi;
   let T = Math.min(Math.max(T0, lo), hi);
@@ -77,7 +77,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
     const F = (which === "h" ? o[H]! : o[S]!) - target;
     const slope = which === "h" ? o[CP]! : o[CP]! / T;
     const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
-    if (Math.abs(F) <= 1e-13 * scale) return { T, rho };
+    if (Math.abs(F) <= 1e-13 * scale) return { T, rho, evaluated: true };
     if (F > 0) hi = T; else lo = T;
     let next = T - F / slope;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
@@ -92,7 +92,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
         throw rangeError(which, target, `${which} at p = ${p} Pa between its values at ${Tlo} K and ${Thi} K for ${f.id}`, code);
       }
       if (Thi - T <= 1e-9 * T && F < 0 && outside) throw rangeError(which, target, `${which} at p = ${p} Pa up to its value at T_max = ${Thi} K for ${f.id}`);
-      return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined, br === "liquid" ? leastAt?.(next) : undefined) };
+      return { T: next, rho: densityTP(f, next, p, branchAt(next), rho, br === "vapour" ? capRho : undefined, br === "liquid" ? leastAt?.(next) : undefined), evaluated: false };
     }
     T = next;
   }
@@ -105,7 +105,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
  * with ρ in [rhoMin, rhoMax]; otherwise undefined, and the caller uses the bracketed nested solver.
  */
 function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: number, rho0: number,
-  Tlo: number, Thi: number, rhoMin: number, rhoMax: number, leastAt?: (T: number) => number): { T: number; rho: number } | undefined {
+  Tlo: number, Thi: number, rhoMin: number, rhoMax: number, leastAt?: (T: number) => number): { T: number; rho: number; evaluated: true } | undefined {
   const o = f.tmp, M = f.M;
   let T = Math.min(Math.max(T0, Tlo), Thi), rho = rho0;
   for (let k = 0; k < 25; k++) {
@@ -116,9 +116,12 @@ function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: numbe
     const y = which === "h" ? o[H]! : o[S]!;
     const F2 = y - target;
     const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
-    if (Math.abs(F1) <= 1e-12 * p && Math.abs(F2) <= 1e-13 * scale) {
+    // In a liquid at low pressure one rounding step of ρ moves p by more than 1e-12 p: the pressure test
+    // allows those few roundings, or Newton would dither at the last digit and hand over to the slow path.
+    const pTol = 1e-12 * p + 4 * Number.EPSILON * rho * dpdr;
+    if (Math.abs(F1) <= pTol && Math.abs(F2) <= 1e-13 * scale) {
       const ok = T >= Tlo - 1e-9 * T && T <= Thi + 1e-9 * T && rho >= rhoMin && rho <= rhoMax && (!leastAt || rho >= leastAt(T));
-      return ok ? { T, rho } : undefined;
+      return ok ? { T, rho, evaluated: true } : undefined; // f.tmp holds the properties at (T, ρ)
     }
     // Jacobian in (T, ln ρ), ρ molar; h and s per unit mass.
     const a = dpdT, b = dpdr * rho;
@@ -171,30 +174,33 @@ function flashPTargetUnchecked(f: Fluid, p: number, which: Target, value: number
     const snap = 1e-9 * (Math.abs(target) + Math.abs(yV - yL));
     if (Math.abs(yL - target) <= snap) return twoPhaseState(f, sat, 0, ref, off);
     if (Math.abs(target - yV) <= snap) return twoPhaseState(f, sat, 1, ref, off);
-    const o = f.tmp;
     if (target > yV) {
-      propertiesTRho(f.model, f.M, sat.TV, sat.rhoV, o);
-      const cp = o[CP]!;
+      const cp = t.cpV;
       const T0 = sat.TV + (which === "h" ? (target - yV) / cp : sat.TV * (Math.exp((target - yV) / cp) - 1));
       if (sat.TV >= f.Tmax) throw rangeError(which, value, `at most the saturated vapour value at p = ${p} Pa for ${f.id} (T_max reached)`);
       const T0c = Math.min(Math.max(T0, sat.TV), f.Tmax);
       const r = newtonAtP(f, p, which, target, T0c, sat.rhoV * (sat.TV / T0c), sat.TV, f.Tmax, 0, sat.rhoV * (1 + 1e-9))
         ?? solveAtP(f, p, which, target, sat.TV, f.Tmax, T0, (T) => (T < f.Tc ? "vapour" : "single"), sat.rhoV, sat.rhoV);
-      return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off);
+      return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off, r.evaluated);
     }
-    propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
-    const cp = o[CP]!;
+    const cp = t.cpL;
     const T0 = sat.TL - (which === "h" ? (yL - target) / cp : sat.TL * (1 - Math.exp((target - yL) / cp)));
     const least = (T: number) => liquidLeast(f, T, sat);
-    const r = newtonAtP(f, p, which, target, Math.max(T0, f.Tmin), sat.rhoL, f.Tmin, sat.TL, 0, Infinity, least)
+    // Start on the liquid at T0: the saturated liquid density there (ancillary) is within a fraction of a
+    // per cent of the compressed liquid's, where sat.rhoL would be a stretched, unstable state far below TL.
+    const Ts = Math.max(T0, f.Tmin);
+    const rho0 = Ts < sat.TL ? Math.max(sat.rhoL, f.rhoLiquid.value(Ts)) : sat.rhoL;
+    const r = newtonAtP(f, p, which, target, Ts, rho0, f.Tmin, sat.TL, 0, Infinity, least)
       ?? solveAtP(f, p, which, target, f.Tmin, sat.TL, T0, () => "liquid", sat.rhoL, undefined, "triple", least);
-    return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
+    return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off, r.evaluated);
   }
   // Above every saturation pressure there is one stable root at each T; start from the critical isotherm.
-  const rc = densityTP(f, Math.min(f.Tc, f.Tmax), p, "single");
+  // Above p_c the critical isotherm's root is denser than ρ_c, where p(ρ) is convex: Newton from the dense side
+  // converges without overshoot, where a start from the ideal-gas density crosses the flat stretch at ρ_c.
+  const rc = densityTP(f, Math.min(f.Tc, f.Tmax), p, "single", p >= f.pc ? f.data.triple.rhoLiquid : undefined);
   const r = newtonAtP(f, p, which, target, f.Tc, rc, f.Tmin, f.Tmax, 0, Infinity, (T) => (T < f.Tc - 2 ? liquidFloor(f, T) : 0))
     ?? solveAtP(f, p, which, target, f.Tmin, f.Tmax, f.Tc, branchAbove(f), undefined, undefined, "triple");
-  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off);
+  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, true), ref, off, r.evaluated);
 }
 
 /**
@@ -210,8 +216,11 @@ function lowPressureVapour(f: Fluid, p: number, which: Target, value: number, ta
   const yLo = which === "h" ? o[H]! : o[S]!;
   if (target < yLo)
     throw rangeError(which, value, `at p = ${p} Pa, values from ${+(yLo + (which === "h" ? off.dh : off.ds)).toPrecision(8)} (vapour at ${+Tlo.toFixed(3)} K; lower states are solid or below the equation's range) for ${f.id}`, "E_BELOW_TRIPLE");
-  const r = solveAtP(f, p, which, target, Tlo, f.Tmax, Tlo + 10, (T) => (T < f.Tc ? "vapour" : "single"), rhoLo, rhoLo);
-  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off);
+  const cp = o[CP]!;
+  const T0 = Math.min(Tlo + (which === "h" ? (target - yLo) / cp : Tlo * (Math.exp((target - yLo) / cp) - 1)), f.Tmax);
+  const r = newtonAtP(f, p, which, target, T0, rhoLo * (Tlo / T0), Tlo, f.Tmax, 0, rhoLo * (1 + 1e-9))
+    ?? solveAtP(f, p, which, target, Tlo, f.Tmax, Tlo + 10, (T) => (T < f.Tc ? "vapour" : "single"), rhoLo, rhoLo);
+  return singleState(f, r.T, r.rho, singlePhase(f, r.T, p, false), ref, off, r.evaluated);
 }
 
 // ---------------------------------------------------------------- pseudo-pure two-phase at fixed T

@@ -39,9 +39,13 @@ export function singlePhase(f: Fluid, T: number, p: number, liquidSide: boolean)
   return liquidSide ? "liquid" : "vapour";
 }
 
-export function singleState(f: Fluid, T: number, rhoMolar: number, phase: Phase, ref: ReferenceName, off: ReferenceOffset): State {
+/**
+ * The state at T [K] and molar ρ. `evaluated` says that f.tmp already holds the property set at exactly
+ * this (T, ρ) (a solver's last, converged evaluation), which is then not computed a second time.
+ */
+export function singleState(f: Fluid, T: number, rhoMolar: number, phase: Phase, ref: ReferenceName, off: ReferenceOffset, evaluated = false): State {
   const o = f.tmp;
-  propertiesTRho(f.model, f.M, T, rhoMolar, o);
+  if (!evaluated) propertiesTRho(f.model, f.M, T, rhoMolar, o);
   const rho = rhoMolar * f.M;
   return {
     fluid: f.id, reference: ref, T, p: o[P]!, rho, v: 1 / rho,
@@ -50,13 +54,13 @@ export function singleState(f: Fluid, T: number, rhoMolar: number, phase: Phase,
   };
 }
 
-/** Mass-based h, s, u, g, v of both ends of a tie line (native reference). */
-export function tieLine(f: Fluid, sat: Saturation): { hL: number; hV: number; sL: number; sV: number; uL: number; uV: number; gL: number; gV: number; vL: number; vV: number } {
+/** Mass-based h, s, u, g, v and c_p of both ends of a tie line (native reference). */
+export function tieLine(f: Fluid, sat: Saturation): { hL: number; hV: number; sL: number; sV: number; uL: number; uV: number; gL: number; gV: number; vL: number; vV: number; cpL: number; cpV: number } {
   const o = f.tmp;
   propertiesTRho(f.model, f.M, sat.TL, sat.rhoL, o);
-  const hL = o[H]!, sL = o[S]!, uL = o[U]!, gL = o[G]!;
+  const hL = o[H]!, sL = o[S]!, uL = o[U]!, gL = o[G]!, cpL = o[CP]!;
   propertiesTRho(f.model, f.M, sat.TV, sat.rhoV, o);
-  return { hL, sL, uL, gL, hV: o[H]!, sV: o[S]!, uV: o[U]!, gV: o[G]!, vL: 1 / (sat.rhoL * f.M), vV: 1 / (sat.rhoV * f.M) };
+  return { hL, sL, uL, gL, cpL, hV: o[H]!, sV: o[S]!, uV: o[U]!, gV: o[G]!, cpV: o[CP]!, vL: 1 / (sat.rhoL * f.M), vV: 1 / (sat.rhoV * f.M) };
 }
 
 /**
