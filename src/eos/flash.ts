@@ -256,7 +256,9 @@ export function flashTP(f: Fluid, T: number, p: number, ref: ReferenceName = "na
   checkT(f, T);
   checkP(f, p);
   const off = referenceOffset(f, ref);
-  if (T < f.Tc && p < f.pc && hasTwoPhaseAtT(f, T)) {
+  // Compared with the top of the solved saturation range, not the file's p_c: an equation's own critical
+  // pressure can lie a few hundred pascals above the published one, and there a cold state is still liquid.
+  if (T < f.Tc && p < twoPhasePmax(f) && hasTwoPhaseAtT(f, T)) {
     if (f.pseudoPure) {
       const pb = f.pBubble!.value(T), pd = f.pDew!.value(T);
       if (p >= pb) return singleState(f, T, densityTP(f, T, p, "liquid", undefined, undefined, Math.max(liquidFloor(f, T), f.rhoc)), "liquid", ref, off);

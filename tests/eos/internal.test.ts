@@ -93,6 +93,24 @@ describe("flash round trips: (T, p) → (p, h), (p, s), (T, s) give the state ba
   }
 });
 
+describe("cold liquid stays liquid across the critical pressure (T, p), every fluid", () => {
+  // Regression: states a few hundred pascals above the published p_c but below the equation's own critical
+  // pressure once took the vapour root at T ≈ 0.7 T_c (found by the 50,000-state sweep on R32, R125, helium).
+  for (const id of fluidIds()) {
+    it(id, () => {
+      const f = getFluid(id);
+      const T = f.Tmin + 0.5 * (Math.min(f.Tc, f.satTmax) - f.Tmin);
+      const below = flashTP(f, T, f.pc * (1 - 1e-4));
+      for (const p of [f.pc * (1 - 1e-9), f.pc, f.pc * (1 + 1e-7), f.pc * (1 + 1e-4)]) {
+        const st = flashTP(f, T, p);
+        expect(st.phase, `${p} Pa`).toBe("liquid");
+        expect(rel(st.rho, below.rho), `${p} Pa`).toBeLessThan(1e-3);
+        expect(rel(flashPH(f, p, st.h).T, T), `${p} Pa`).toBeLessThan(1e-9);
+      }
+    });
+  }
+});
+
 describe("reference states", () => {
   it("IIR: saturated liquid at 0 °C has h = 200 kJ/kg and s = 1 kJ/(kg K) (ammonia, propane, R32)", () => {
     for (const id of ["ammonia", "propane", "R32"]) {
