@@ -1,4 +1,4 @@
-// The two-phase (p, h) and (p, s) flashes by Newton on (ln K, T): their states against the independent
+// The two-phase (p, h), (p, s) and (p, x) flashes by Newton on (ln K, T): their states against the independent
 // (T, x) and (T, p) flashes (substitution on K), across the dome, for a binary, a ternary and a quinary.
 import { describe, expect, it } from "vitest";
 import { getMixture, mixtureFlash } from "../../src/eos/mixture/index.js";
@@ -18,6 +18,26 @@ describe("two-phase (p, h) and (p, s) by Newton", () => {
           expect(Math.abs(s.T - T)).toBeLessThan(1e-7);
           expect(Math.abs(s.h - a.h)).toBeLessThan(1e-6 * Math.abs(a.h) + 1e-3);
           // The (T, p) flash splits by substitution on K: an independent route to the same phases.
+          const tp = mixtureFlash(mix, { T: b.T, p: a.p });
+          for (let k = 0; k < mix.N; k++) {
+            expect(Math.abs(tp.liquid!.moleFractions[k]! - b.liquid!.moleFractions[k]!)).toBeLessThan(1e-8);
+            expect(Math.abs(tp.vapour!.moleFractions[k]! - b.vapour!.moleFractions[k]!)).toBeLessThan(1e-8);
+          }
+        }
+      }
+    });
+  }
+  for (const id of ["R454B", "R407C-mix", "R448A"]) {
+    it(`${id}: (p, x) gives the (T, x) state back; its phases equal those of the (T, p) split`, () => {
+      const mix = getMixture(id);
+      const c = mix.envelope().critical;
+      for (const T of [230, 270, Math.min(320, c.T - 15)]) {
+        for (const q of [0.02, 0.3, 0.7, 0.98]) {
+          const a = mixtureFlash(mix, { T, x: q });
+          const b = mixtureFlash(mix, { p: a.p, x: q });
+          expect(Math.abs(b.T - T)).toBeLessThan(1e-7);
+          expect(Math.abs(b.x! - q)).toBeLessThan(1e-9);
+          expect(Math.abs(b.h - a.h)).toBeLessThan(1e-7 * Math.abs(a.h) + 1e-3);
           const tp = mixtureFlash(mix, { T: b.T, p: a.p });
           for (let k = 0; k < mix.N; k++) {
             expect(Math.abs(tp.liquid!.moleFractions[k]! - b.liquid!.moleFractions[k]!)).toBeLessThan(1e-8);

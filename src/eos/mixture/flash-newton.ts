@@ -1,4 +1,4 @@
-// Two-phase flash of a mixture at fixed pressure and enthalpy or entropy: one Newton iteration on
+// Two-phase flash of a mixture at fixed pressure and enthalpy, entropy or quality: one Newton iteration on
 // (ln K₁ … ln K_N, T) together, instead of an outer root search in T around a converged inner split.
 import { CP, H, S } from "../properties.js";
 import { solveLinear } from "./linear.js";
@@ -77,12 +77,13 @@ export interface NewtonSplit {
 
 /**
  * Solves equal fugacities and a total molar enthalpy (which = "h") or entropy ("s") equal to `target`
- * [J/mol or J/(mol K), native reference] at pressure p. The enthalpy row uses partial molar enthalpies
- * H̄ᵢ − H̄ᵢ^ig = −RT² ∂ln φᵢ/∂T, so the Jacobian is complete; the entropy row uses S̄ᵛ − S̄ˡ = (H̄ᵛ − H̄ˡ)/T,
- * exact at equilibrium, where Newton converges. Returns null (the caller falls back) if the split leaves the
+ * [J/mol or J/(mol K), native reference], or a vapour mass fraction ("x") equal to `target`, at pressure p.
+ * The enthalpy row uses partial molar enthalpies H̄ᵢ − H̄ᵢ^ig = −RT² ∂ln φᵢ/∂T, so the Jacobian is complete;
+ * the entropy row uses S̄ᵛ − S̄ˡ = (H̄ᵛ − H̄ˡ)/T, exact at equilibrium, where Newton converges; the quality
+ * row βM(y)/M(z) depends on ln K alone. Returns null (the caller falls back) if the split leaves the
  * two-phase region, a linear solve fails or the cap is reached.
  */
-export function newtonAtP(mix: Mixture, p: number, which: "h" | "s", target: number, start: NewtonStart): NewtonSplit | null {
+export function newtonAtP(mix: Mixture, p: number, which: "h" | "s" | "x", target: number, start: NewtonStart): NewtonSplit | null {
   let w = solvers.get(mix);
   if (!w) solvers.set(mix, (w = new PhNewton(mix)));
   const N = w.N, n1 = N + 1, z = mix.z, R = mix.model.R;
@@ -111,20 +112,23 @@ export function newtonAtP(mix: Mixture, p: number, which: "h" | "s", target: num
       L.evalLnPhi(T, p, "liquid", true);
       V.evalLnPhi(T, p, "vapour", true);
     }
-    // Phase enthalpies (or entropies) per mole and heat capacities, native reference.
+    // Phase enthalpies (or entropies) per mole and heat capacities, native reference; a quality needs neither.
     const ML = mix.model.molarMass(x), MV = mix.model.molarMass(y);
-    mixturePropertiesTRho(mix.model, T, L.rho, x, out);
-    const yL = (which === "h" ? out[H]! : out[S]!) * ML, cpL = out[CP]! * ML;
-    mixturePropertiesTRho(mix.model, T, V.rho, y, out);
-    const yV = (which === "h" ? out[H]! : out[S]!) * MV, cpV = out[CP]! * MV;
-    const scale = which === "h" ? R * T : R;
+    let yL = 0, yV = 0, cpL = 0, cpV = 0;
+    if (which !== "x") {
+      mixturePropertiesTRho(mix.model, T, L.rho, x, out);
+      yL = (which === "h" ? out[H]! : out[S]!) * ML; cpL = out[CP]! * ML;
+      mixturePropertiesTRho(mix.model, T, V.rho, y, out);
+      yV = (which === "h" ? out[H]! : out[S]!) * MV; cpV = out[CP]! * MV;
+    }
+    const scale = which === "h" ? R * T : which === "s" ? R : 1;
     let resid = 0;
     for (let i = 0; i < N; i++) {
       F[i] = lnK[i]! + V.lnPhi[i]! - L.lnPhi[i]!;
       resid = Math.max(resid, Math.abs(F[i]!));
     }
     const fug = resid;
-    F[N] = ((1 - beta) * yL + beta * yV - target) / scale;
+    F[N] = which === "x" ? (beta * MV) / mix.M - target : ((1 - beta) * yL + beta * yV - target) / scale;
     resid = Math.max(resid, Math.abs(F[N]!));
     if (!Number.isFinite(resid)) return null;
     const stalledButClose = it >= 6 && fug <= 1e-9 && Math.abs(F[N]!) * scale <= start.stallTolerance;
@@ -165,16 +169,19 @@ export function newtonAtP(mix: Mixture, p: number, which: "h" | "s", target: num
         }
         Jkeep[i * n1 + N] = V.dT[i]! - L.dT[i]!;
       }
-      // d(total)/d ln K_j through the vapour mole numbers n_k = β y_k, at partial molar values.
+      // d(total)/d ln K_j through the vapour mole numbers n_k = β y_k, at partial molar values (for a
+      // quality, through the vapour's mass Σ M_k n_k, which does not depend on T).
       for (let j = 0; j < N; j++) {
         let s = 0;
         for (let k = 0; k < N; k++) {
+          const dn = dBeta[j]! * y[k]! + beta * dy[k * N + j]!;
+          if (which === "x") { s += mix.model.M[k]! * dn; continue; }
           const dH = -R * T * T * (V.dT[k]! - L.dT[k]!);
-          s += (which === "h" ? dH : dH / T) * (dBeta[j]! * y[k]! + beta * dy[k * N + j]!);
+          s += (which === "h" ? dH : dH / T) * dn;
         }
-        Jkeep[N * n1 + j] = s / scale;
+        Jkeep[N * n1 + j] = which === "x" ? s / mix.M : s / scale;
       }
-      Jkeep[N * n1 + N] = ((1 - beta) * cpL + beta * cpV) / (which === "h" ? scale : scale * T);
+      Jkeep[N * n1 + N] = which === "x" ? 0 : ((1 - beta) * cpL + beta * cpV) / (which === "h" ? scale : scale * T);
       fresh = false;
     }
     prev = resid;

@@ -151,19 +151,19 @@ function twoPhaseAtP(mix: Mixture, p: number, bub: SaturationPoint, dew: Saturat
 }
 
 /**
- * The two-phase (p, h) or (p, s) state by Newton on (ln K, T) together, started where the target falls
- * linearly between the bubble and dew points; null when it does not converge (the caller then brackets in T).
+ * The two-phase (p, h), (p, s) or (p, x) state by Newton on (ln K, T) together, started a fraction fT of the
+ * way from the bubble to the dew point (where the target falls linearly between them); `target` is molar
+ * for h and s, a mass fraction for x. Null when it does not converge (the caller then brackets in T).
  */
-function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, yL: number, yV: number, which: Target, target: number,
-  ref: ReferenceName, off: ReferenceOffset): MixtureState | null {
-  const fT = (target - yL) / (yV - yL);
+function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, fT: number, which: Target | "x", target: number,
+  stallTolerance: number, ref: ReferenceName, off: ReferenceOffset): MixtureState | null {
   const T0 = bub.T + fT * (dew.T - bub.T);
   const f = 1 - fT;
   const lnK = new Float64Array(mix.N);
   for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
-  const r = newtonAtP(mix, p, which, target * mix.M, {
+  const r = newtonAtP(mix, p, which, target, {
     T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T, Thi: dew.T,
-    stallTolerance: 1e-6 * (Math.abs(yV - yL) + Math.abs(target)) * mix.M,
+    stallTolerance,
   });
   if (!r) return null;
   return mixtureTwoPhaseState(mix, r.T, p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
@@ -212,7 +212,7 @@ function flashPTarget(mix: Mixture, p: number, which: Target, value: number, ref
     }
     if (target === yL) return saturatedState(mix, bub, ref, off);
     if (target === yV) return saturatedState(mix, dew, ref, off);
-    const fast = newtonTwoPhase(mix, p, bub, dew, yL, yV, which, target, ref, off);
+    const fast = newtonTwoPhase(mix, p, bub, dew, (target - yL) / (yV - yL), which, target * mix.M, 1e-6 * (Math.abs(yV - yL) + Math.abs(target)) * mix.M, ref, off);
     if (fast) return fast;
     const scale = Math.abs(yV - yL) + Math.abs(target);
     return twoPhaseAtP(mix, p, bub, dew, yL, yV, (st) => (which === "h" ? st.h : st.s) - (which === "h" ? off.dh : off.ds), target, ref, off, scale, `${which} at fixed pressure (two-phase)`);
@@ -229,10 +229,12 @@ function checkQuality(x: number): void {
 function flashPX(mix: Mixture, p: number, q: number, ref: ReferenceName, off: ReferenceOffset): MixtureState {
   checkP(mix, p);
   checkQuality(q);
+  // The saturated ends need only their own point.
+  if (q === 0) return saturatedState(mix, saturationPoint(mix, "bubble", "p", p), ref, off);
+  if (q === 1) return saturatedState(mix, saturationPoint(mix, "dew", "p", p), ref, off);
   const bub = saturationPoint(mix, "bubble", "p", p), dew = saturationPoint(mix, "dew", "p", p);
-  if (q === 0) return saturatedState(mix, bub, ref, off);
-  if (q === 1) return saturatedState(mix, dew, ref, off);
-  return twoPhaseAtP(mix, p, bub, dew, 0, 1, (st) => st.x!, q, ref, off, 1, "quality at fixed pressure");
+  return newtonTwoPhase(mix, p, bub, dew, q, "x", q, 1e-10, ref, off)
+    ?? twoPhaseAtP(mix, p, bub, dew, 0, 1, (st) => st.x!, q, ref, off, 1, "quality at fixed pressure");
 }
 
 function flashTX(mix: Mixture, T: number, q: number, ref: ReferenceName, off: ReferenceOffset): MixtureState {
