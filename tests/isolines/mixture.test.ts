@@ -61,8 +61,12 @@ for (const id of ["R454B", "R407C-mix"]) {
           const v = valueAt(mix, line, line.points[k]!);
           if (v === null) { refused++; continue; }
           if (v === "critical") { critical++; continue; }
-          const scale = line.quantity === "entropy" ? Math.abs(line.value) + 1e3 : 1;
-          expect(Math.abs(v - line.value)).toBeLessThanOrEqual(tol * scale);
+          // A quality read back by a (p, h) flash carries that flash's h error divided by h″ − h′, which shrinks
+          // towards the critical point: within 0.5 % of p_c (where h″ − h′ is below a sixth of its value at
+          // p_c / 2 for both blends here, and below a fifteenth at 0.999 p_c) the allowance is ten times wider.
+          const nearTop = line.quantity !== "temperature" && line.quantity !== "entropy" && line.points[k]![1] > 0.995 * mix.envelope().critical.p;
+          const scale = line.quantity === "entropy" ? Math.abs(line.value) + 1e3 : nearTop ? 10 : 1;
+          expect(Math.abs(v - line.value), `${line.quantity} ${line.value} at ${line.points[k]![1]} Pa`).toBeLessThanOrEqual(tol * scale);
           checked++;
         }
       }

@@ -152,6 +152,31 @@ describe("flashes", () => {
   });
 });
 
+describe("the critical point closes the envelope", () => {
+  // Internal: the bubble trace is continued through the critical point, located within the step that crosses it.
+  for (const id of ["R407C-mix", "R404A-mix", "R454B", "R448A", "R452B", "R410A-mix", "R507A-mix", "R513A", "R449A"]) {
+    it(`${id}: both sides end next to the critical point; bubble and dew points solve at 0.999 p_c`, () => {
+      const mix = getMixture(id);
+      const env = mix.envelope();
+      const c = env.critical;
+      for (const side of [env.bubble, env.dew]) {
+        const end = side[side.length - 1]!;
+        expect(Math.abs(end.T - c.T), `${id} T`).toBeLessThan(0.3);
+        expect(rel(end.p, c.p), `${id} p`).toBeLessThan(5e-3);
+        // Phases within 15 % in density at the last traced points: the gap the critical point closes is short.
+        expect(Math.abs(Math.log(end.rhoFeed / end.rhoTrial)), `${id} density ratio`).toBeLessThan(0.15);
+      }
+      for (const x of [0, 1]) {
+        const st = mixtureFlash(mix, { p: 0.999 * c.p, x });
+        expect(Math.abs(st.T - c.T)).toBeLessThan(1.5);
+      }
+    });
+  }
+  it("the zeotropic blends' critical point is bracketed by one continuation step", () => {
+    for (const id of ["R407C-mix", "R404A-mix", "R454B", "R448A"]) expect(getMixture(id).envelope().critical.bracketed, id).toBe(true);
+  });
+});
+
 describe("robustness", () => {
   it("random (p, h) per blend: a finite state or a typed error, never NaN", () => {
     const rand = rng(7);

@@ -49,7 +49,14 @@ export class IncipientSolver {
     this.omega = Float64Array.from(m.fluids, (f) => (f.pSat ? -Math.log10(f.pSat.value(0.7 * f.Tc) / f.pc) - 1 : 0));
   }
 
+  /**
+   * Close to the critical point the liquid and vapour roots of each phase lie close together and swap roles
+   * as the continuation passes it: there each phase takes the root its last density leads to.
+   */
+  nearCritical = false;
+
   private get branches(): [Branch, Branch] {
+    if (this.nearCritical) return ["single", "single"];
     return this.feedLiquid ? ["liquid", "vapour"] : ["vapour", "liquid"];
   }
 
