@@ -10,7 +10,7 @@ import type { Mixture } from "./mixture.js";
 import { newtonAtP } from "./flash-newton.js";
 import { mixturePropertiesTRho } from "./properties.js";
 import { mixtureReferenceOffset } from "./reference.js";
-import { saturationPoint, type SaturationPoint } from "./saturation.js";
+import { estimatedSaturationPoint, saturationPoint, type SaturationPoint } from "./saturation.js";
 import { mixtureSingleState, mixtureTwoPhaseState, phaseComposition, type MixtureState } from "./state.js";
 
 export type MixtureInputName = "T" | "p" | "h" | "s" | "x";
@@ -19,6 +19,8 @@ const NAMES: readonly MixtureInputName[] = ["T", "p", "h", "s", "x"];
 export const MIXTURE_PAIRS = ["T,p", "p,h", "p,s", "p,x", "T,x"] as const;
 
 const MAX_ITER = 100;
+/** Widening [K] of the bubble–dew temperature bounds when they come from the envelope's interpolation. */
+const ESTIMATE_MARGIN = 2;
 const out = new Float64Array(10);
 
 function checkT(mix: Mixture, T: number): void {
@@ -156,13 +158,13 @@ function twoPhaseAtP(mix: Mixture, p: number, bub: SaturationPoint, dew: Saturat
  * for h and s, a mass fraction for x. Null when it does not converge (the caller then brackets in T).
  */
 function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, fT: number, which: Target | "x", target: number,
-  stallTolerance: number, ref: ReferenceName, off: ReferenceOffset): MixtureState | null {
+  stallTolerance: number, ref: ReferenceName, off: ReferenceOffset, margin = 0): MixtureState | null {
   const T0 = bub.T + fT * (dew.T - bub.T);
   const f = 1 - fT;
   const lnK = new Float64Array(mix.N);
   for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
   const r = newtonAtP(mix, p, which, target, {
-    T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T, Thi: dew.T,
+    T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T - margin, Thi: dew.T + margin,
     stallTolerance,
   });
   if (!r) return null;
@@ -210,8 +212,11 @@ function flashPTarget(mix: Mixture, p: number, which: Target, value: number, ref
       const r = solveSingleAtP(mix, p, which, target, mix.Tmin, bub.T, T0, () => "liquid");
       return mixtureSingleState(mix, r.T, r.rho, phaseOf(mix, r.T, p, true), ref, off);
     }
-    if (target === yL) return saturatedState(mix, bub, ref, off);
-    if (target === yV) return saturatedState(mix, dew, ref, off);
+    // Within rounding of a saturated end (as the pure-fluid flash does) the state is that end: a Newton or
+    // bracket in T cannot resolve a split whose vapour fraction is a few ulps from 0 or 1.
+    const snap = 1e-9 * (Math.abs(target) + Math.abs(yV - yL));
+    if (Math.abs(target - yL) <= snap) return saturatedState(mix, bub, ref, off);
+    if (Math.abs(target - yV) <= snap) return saturatedState(mix, dew, ref, off);
     const fast = newtonTwoPhase(mix, p, bub, dew, (target - yL) / (yV - yL), which, target * mix.M, 1e-6 * (Math.abs(yV - yL) + Math.abs(target)) * mix.M, ref, off);
     if (fast) return fast;
     const scale = Math.abs(yV - yL) + Math.abs(target);
@@ -232,6 +237,11 @@ function flashPX(mix: Mixture, p: number, q: number, ref: ReferenceName, off: Re
   // The saturated ends need only their own point.
   if (q === 0) return saturatedState(mix, saturationPoint(mix, "bubble", "p", p), ref, off);
   if (q === 1) return saturatedState(mix, saturationPoint(mix, "dew", "p", p), ref, off);
+  // Newton from the envelope's interpolated bubble and dew points first (the solution does not depend on
+  // the start; its T bounds are widened by the interpolation's possible error), then from solved ones.
+  const eb = estimatedSaturationPoint(mix, "bubble", p), ed = estimatedSaturationPoint(mix, "dew", p);
+  const fromEnvelope = eb && ed ? newtonTwoPhase(mix, p, eb, ed, q, "x", q, 1e-10, ref, off, ESTIMATE_MARGIN) : null;
+  if (fromEnvelope) return fromEnvelope;
   const bub = saturationPoint(mix, "bubble", "p", p), dew = saturationPoint(mix, "dew", "p", p);
   return newtonTwoPhase(mix, p, bub, dew, q, "x", q, 1e-10, ref, off)
     ?? twoPhaseAtP(mix, p, bub, dew, 0, 1, (st) => st.x!, q, ref, off, 1, "quality at fixed pressure");

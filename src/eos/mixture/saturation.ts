@@ -45,6 +45,25 @@ function result(mix: Mixture, kind: "bubble" | "dew"): SaturationPoint {
   return { kind, T: Math.exp(s.X[N]!), p: Math.exp(s.X[N + 1]!), rhoFeed: s.feed.rho, rhoIncipient: s.trial.rho, incipient: s.trial.x.slice(), lnK: s.X.slice(0, N) };
 }
 
+/**
+ * A bubble or dew point at pressure p [Pa] read off the traced envelope by interpolation, without solving
+ * it: a starting value for solvers that carry the equilibrium conditions themselves. Undefined outside the
+ * traced range.
+ */
+export function estimatedSaturationPoint(mix: Mixture, kind: "bubble" | "dew", p: number): SaturationPoint | undefined {
+  const env = mix.envelope();
+  const br = bracket(kind === "bubble" ? env.bubble : env.dew, "p", p);
+  if (!br) return undefined;
+  const [a, b, f] = br;
+  const lnK = new Float64Array(mix.N);
+  for (let k = 0; k < mix.N; k++) lnK[k] = a.lnK[k]! + f * (b.lnK[k]! - a.lnK[k]!);
+  return {
+    kind, T: Math.exp(Math.log(a.T) + f * (Math.log(b.T) - Math.log(a.T))), p,
+    rhoFeed: a.rhoFeed + f * (b.rhoFeed - a.rhoFeed), rhoIncipient: a.rhoTrial + f * (b.rhoTrial - a.rhoTrial),
+    incipient: new Float64Array(0), lnK,
+  };
+}
+
 /** The bubble (feed liquid) or dew (feed vapour) point of the mixture at T [K] or p [Pa]. */
 export function saturationPoint(mix: Mixture, kind: "bubble" | "dew", given: "T" | "p", v: number): SaturationPoint {
   const env = mix.envelope();

@@ -27,12 +27,37 @@ interface MixBuild {
   pFloor: number;
   /** Highest pressure a line may reach [Pa]. */
   pTop: number;
+  /** The critical point on the page, where the dome and the quality lines close. */
+  apex: Point;
+  /** Top of the traced part of the dome and quality lines [Pa] (see closingPressure). */
+  pClose: number;
 }
 
 const T_STEPS = [10, 20, 50, 100];
 const MAX_ISOTHERMS = 36;
-/** Bubble and dew points are solved up to this fraction of the critical pressure; the last sliver closes by a chord. */
+/** Bubble and dew points are solved up to at most this fraction of the critical pressure. */
 const NEAR_CRITICAL = 1 - 1e-4;
+/** The closing stretch never starts below this fraction of the critical pressure. */
+const CLOSE_FLOOR = 0.99;
+
+/**
+ * The pressure up to which the dome and quality lines are traced. Above it lies a stretch less high on the page
+ * than the trace tolerance (up to the cricondenbar, the envelope's highest pressure); every line there runs
+ * from its traced end to the critical point, so the chord that closes it keeps within the tolerance. Close to
+ * the critical point the phase-equilibrium solvers slow down and may fail, which this stretch avoids.
+ */
+function closingPressure(mapping: PageMapping, toleranceMm: number, pc: number, pBar: number): number {
+  const mmPerLnP = mapping.frame.heightMm / Math.log(mapping.window.pMax / mapping.window.pMin);
+  return Math.min(pc * NEAR_CRITICAL, Math.max(CLOSE_FLOOR * pc, Math.max(pc, pBar) * Math.exp(-toleranceMm / mmPerLnP)));
+}
+
+/** Closes the last piece at the critical point where it ends at the top of the traced range. */
+function closeAtApex(b: MixBuild, pieces: Point[][]): Point[][] {
+  const last = pieces[pieces.length - 1];
+  const end = last?.[last.length - 1];
+  if (end && end[1] >= b.pClose * (1 - 1e-9) && b.apex[1] <= b.mapping.window.pMax) last!.push(b.apex);
+  return pieces;
+}
 
 function point(st: MixtureState | null): Point | null {
   return st ? [st.h, st.p] : null;
@@ -74,14 +99,10 @@ function lnRange(b: MixBuild, lo: number, hi: number): [number, number] {
   return [Math.log(Math.max(lo, b.mapping.window.pMin * 0.999)), Math.log(Math.min(hi, b.pTop))];
 }
 
-function domeLine(b: MixBuild, q: 0 | 1): Point[][] {
-  const [t0, t1] = lnRange(b, b.pFloor, b.pc * NEAR_CRITICAL);
-  return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x: q }, b.ref))), t0, t1);
-}
-
+/** A line of constant quality (0 and 1: the two sides of the dome) from the window's floor to the critical point. */
 function qualityLine(b: MixBuild, x: number): Point[][] {
-  const [t0, t1] = lnRange(b, b.pFloor, b.pc * NEAR_CRITICAL);
-  return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x }, b.ref))), t0, t1);
+  const [t0, t1] = lnRange(b, b.pFloor, b.pClose);
+  return closeAtApex(b, trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), x }, b.ref))), t0, t1));
 }
 
 /** The explicit point at T [K] and molar density ρ [mol/m³] of the overall composition: (h, p), or null outside the model. */
@@ -175,16 +196,22 @@ export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet
   const mapping = pageMapping(window, opts.frame);
   const env = mix.envelope();
   const stats: TraceStats = { evaluations: 0, capped: 0, breaks: 0, bridges: 0, longestBridgeMm: 0 };
+  // The critical point's enthalpy explicitly at the envelope's (T, ρ): no flash so close to it.
+  const o = new Float64Array(12);
+  mixturePropertiesTRho(mix.model, env.critical.T, env.critical.rho, mix.z, o);
+  const off = mixtureReferenceOffset(mix, ref);
+  const apex: Point = [o[H]! + off.dh, env.critical.p];
   const b: MixBuild = {
-    mix, ref, off: mixtureReferenceOffset(mix, ref), opts, mapping, trace: { mapping, toleranceMm: opts.toleranceMm }, stats,
+    mix, ref, off, opts, mapping, trace: { mapping, toleranceMm: opts.toleranceMm }, stats,
     Tc: env.critical.T, pc: env.critical.p, pFloor: Math.max(env.bubble[0]!.p, env.dew[0]!.p), pTop: Math.min(window.pMax, mix.pmax),
+    apex, pClose: closingPressure(mapping, opts.toleranceMm, env.critical.p, env.cricondenbar.p),
   };
   const r = ranges(b);
   const on = opts.families, d = opts.densities;
   const out: Line[] = [];
   if (on.dome) {
-    out.push(...lines(b, "saturation-liquid", { si: 0, display: 0, rank: "major" }, domeLine(b, 0)));
-    out.push(...lines(b, "saturation-vapour", { si: 1, display: 1, rank: "major" }, domeLine(b, 1)));
+    out.push(...lines(b, "saturation-liquid", { si: 0, display: 0, rank: "major" }, qualityLine(b, 0)));
+    out.push(...lines(b, "saturation-vapour", { si: 1, display: 1, rank: "major" }, qualityLine(b, 1)));
   }
   if (on.qualities) for (const v of values(b, "qualities", "quality", () => qualityValues(d))) out.push(...lines(b, "quality", v, qualityLine(b, v.si)));
   if (on.isotherms) {
@@ -196,13 +223,9 @@ export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet
     for (const v of values(b, "isenthalps", "enthalpy", () => isenthalpValues(opts.units, mapping, d)).filter((v) => v.si >= window.hMin && v.si <= window.hMax))
       out.push(...lines(b, "enthalpy", v, [[[v.si, window.pMin], [v.si, window.pMax]]]));
   }
-  // The critical point's enthalpy explicitly at the envelope's (T, ρ): no flash so close to it.
-  const o = new Float64Array(12);
-  mixturePropertiesTRho(mix.model, env.critical.T, env.critical.rho, mix.z, o);
-  const off = mixtureReferenceOffset(mix, ref);
   return {
     fluid: mix.id, units: opts.units, reference: ref, window, frame: opts.frame, toleranceMm: opts.toleranceMm,
-    critical: { T: env.critical.T, p: env.critical.p, h: o[H]! + off.dh },
+    critical: { T: env.critical.T, p: env.critical.p, h: apex[0] },
     lines: out, stats,
   };
 }
