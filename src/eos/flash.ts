@@ -61,6 +61,15 @@ function liquidLeast(f: Fluid, T: number, sat: Saturation): number {
 type Target = "h" | "s";
 
 /**
+ * The size against which a residual in h [J/kg] or s [J/(kg K)] is judged: the target plus c_p T (or c_p),
+ * with c_p capped at 100 R/M, since near the critical point it diverges and would pass any residual.
+ */
+export function targetScale(which: Target, target: number, T: number, cp: number, RM: number): number {
+  const c = Math.min(cp, 100 * RM);
+  return which === "h" ? Math.abs(target) + c * T : Math.abs(target) + c;
+}
+
+/**
  * T (and molar ρ) at pressure p where h or s (native reference) equals `target`, searched in [Tlo, Thi].
  * `branchAt` picks the density root for each trial temperature; `capRho` bounds the vapour root.
  */
@@ -76,7 +85,7 @@ function solveAtP(f: Fluid, p: number, which: Target, target: number, Tlo: numbe
     propertiesTRho(f.model, f.M, T, rho, o);
     const F = (which === "h" ? o[H]! : o[S]!) - target;
     const slope = which === "h" ? o[CP]! : o[CP]! / T;
-    const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
+    const scale = targetScale(which, target, T, o[CP]!, f.R / f.M);
     if (Math.abs(F) <= 1e-13 * scale) return { T, rho, evaluated: true };
     if (F > 0) hi = T; else lo = T;
     let next = T - F / slope;
@@ -115,7 +124,7 @@ function newtonAtP(f: Fluid, p: number, which: Target, target: number, T0: numbe
     const F1 = o[P]! - p;
     const y = which === "h" ? o[H]! : o[S]!;
     const F2 = y - target;
-    const scale = which === "h" ? Math.abs(target) + o[CP]! * T : Math.abs(target) + o[CP]!;
+    const scale = targetScale(which, target, T, o[CP]!, f.R / f.M);
     // In a liquid at low pressure one rounding step of ρ moves p by more than 1e-12 p: the pressure test
     // allows those few roundings, or Newton would dither at the last digit and hand over to the slow path.
     const pTol = 1e-12 * p + 4 * Number.EPSILON * rho * dpdr;

@@ -111,6 +111,23 @@ describe("cold liquid stays liquid across the critical pressure (T, p), every fl
   }
 });
 
+describe("compressed liquid just below the critical pressure, where c_p at the bubble point diverges", () => {
+  // Regression: the residual test scaled with c_p·T, which near p_c passed any residual; R507A at 0.998 p_c
+  // returned a wrong state (caught by the result guard, found by the 50,000-state sweep).
+  for (const id of ["R507A", "R410A", "R404A", "R407C", "co2", "R32", "water"]) {
+    it(id, () => {
+      const f = getFluid(id);
+      for (const r of [0.99, 0.995, 0.998, 0.999, 0.9995]) {
+        for (const T of [0.7, 0.8, 0.9, 0.95].map((x) => x * f.Tc).filter((T) => T > f.Tmin)) {
+          const a = flashTP(f, T, r * f.pc);
+          expect(rel(flashPH(f, a.p, a.h).T, T), `${T} K, ${r} p_c`).toBeLessThan(1e-9);
+          expect(rel(flashPS(f, a.p, a.s).T, T), `${T} K, ${r} p_c`).toBeLessThan(1e-9);
+        }
+      }
+    });
+  }
+});
+
 describe("reference states", () => {
   it("IIR: saturated liquid at 0 °C has h = 200 kJ/kg and s = 1 kJ/(kg K) (ammonia, propane, R32)", () => {
     for (const id of ["ammonia", "propane", "R32"]) {

@@ -2,6 +2,7 @@
 // dew points bounding the two-phase region and a Rachford–Rice split inside it. Every loop is bracketed and capped.
 import { convergenceError, DomeprintError, inputError, rangeError, requireNumber } from "../../errors.js";
 import type { Branch } from "../density.js";
+import { targetScale } from "../flash.js";
 import { CP, H, S } from "../properties.js";
 import { checkReferenceName, type ReferenceName, type ReferenceOffset } from "../reference.js";
 import type { Phase } from "../state.js";
@@ -89,7 +90,7 @@ function solveSingleAtP(mix: Mixture, p: number, which: Target, target: number, 
     mixturePropertiesTRho(mix.model, T, rho, mix.z, out);
     const F = (which === "h" ? out[H]! : out[S]!) - target;
     const slope = which === "h" ? out[CP]! : out[CP]! / T;
-    const scale = which === "h" ? Math.abs(target) + out[CP]! * T : Math.abs(target) + out[CP]!;
+    const scale = targetScale(which, target, T, out[CP]!, mix.model.R / mix.M);
     if (Math.abs(F) <= 1e-12 * scale) return { T, rho };
     if (F > 0) hi = T; else lo = T;
     let next = T - F / slope;
