@@ -71,7 +71,7 @@ function traceFamilies(b: Build): Line[] {
     ...(on.qualities ? valuesOf(b, "qualities", "quality", () => qualityValues(d)).flatMap((v) => lines(b, "quality", v, traceQualityLine(ctx, tie, v.si))) : []),
     ...(on.isotherms ? isotherms(b) : []),
     ...(on.isentropes ? valuesOf(b, "isentropes", "entropy", () => isentropeValues(opts.units, ranges, d)).flatMap((v) => lines(b, "entropy", v, traceIsentrope(ctx, tie, v.si))) : []),
-    ...(on.isochores ? valuesOf(b, "isochores", "specific-volume", () => isochoreValues(b.f, opts.units, ranges, d)).flatMap((v) => lines(b, "specific-volume", v, traceIsochore(ctx, tie, v.si))) : []),
+    ...(on.isochores ? valuesOf(b, "isochores", "specific-volume", () => isochoreValues(1 / (b.f.rhoc * b.f.M), opts.units, ranges, d)).flatMap((v) => lines(b, "specific-volume", v, traceIsochore(ctx, tie, v.si))) : []),
     ...(on.isenthalps ? isenthalps(b) : []),
   ];
 }

@@ -120,8 +120,9 @@ export function isentropeValues(units: UnitSystem, r: WindowRanges, d: Densities
   return family(units, "entropy", multiplesBetween(lo, hi, step));
 }
 
-export function isochoreValues(f: Fluid, units: UnitSystem, r: WindowRanges, d: Densities): FamilyValue[] {
-  const lo = toDisplay(units, "specific-volume", 1 / (f.rhoc * f.M)), hi = toDisplay(units, "specific-volume", r.vHi);
+/** Isochores from the critical specific volume vCritical [m³/kg] up to the window's largest volume. */
+export function isochoreValues(vCritical: number, units: UnitSystem, r: WindowRanges, d: Densities): FamilyValue[] {
+  const lo = toDisplay(units, "specific-volume", vCritical), hi = toDisplay(units, "specific-volume", r.vHi);
   return hi > lo ? family(units, "specific-volume", seriesBetween(lo * (1 + 1e-9), hi, d.isochore ?? ONE_TWO_FIVE)) : [];
 }
 

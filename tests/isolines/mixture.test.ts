@@ -29,12 +29,14 @@ function valueAt(mix: Mixture, line: Line, q: Point): number | null | "critical"
   switch (line.quantity) {
     case "temperature": return st.T;
     case "entropy": return st.s;
+    case "specific-volume": return st.v;
     case "quality": case "saturation-liquid": case "saturation-vapour": return st.x ?? (st.phase === "liquid" ? 0 : 1);
     default: return null;
   }
 }
 
-const TOL: Partial<Record<Line["quantity"], number>> = { temperature: 1e-6, entropy: 1e-6, quality: 1e-7, "saturation-liquid": 1e-7, "saturation-vapour": 1e-7 };
+// Specific volume relative: inside the dome the (p, h) read-back multiplies its own residual in h by (v″ − v′)/v.
+const TOL: Partial<Record<Line["quantity"], number>> = { temperature: 1e-6, entropy: 1e-6, "specific-volume": 1e-6, quality: 1e-7, "saturation-liquid": 1e-7, "saturation-vapour": 1e-7 };
 
 for (const id of ["R454B", "R407C-mix"]) {
   describe(`${id} line set`, () => {
@@ -47,7 +49,7 @@ for (const id of ["R454B", "R407C-mix"]) {
 
     it("has a dome, isotherms, quality lines and isentropes, and no breaks", () => {
       const q = new Set(set.lines.map((l) => l.quantity));
-      for (const k of ["saturation-liquid", "saturation-vapour", "temperature", "quality", "entropy"]) expect(q.has(k as Line["quantity"])).toBe(true);
+      for (const k of ["saturation-liquid", "saturation-vapour", "temperature", "quality", "entropy", "specific-volume"]) expect(q.has(k as Line["quantity"])).toBe(true);
       expect(set.stats.breaks).toBe(0);
       expect(set.fluid).toBe(id);
     });
@@ -66,14 +68,14 @@ for (const id of ["R454B", "R407C-mix"]) {
           // towards the critical point: within 0.5 % of p_c the allowance is the same enthalpy, 1e-7 of the
           // latent heat at p_c / 2, divided by the latent heat at the point's pressure.
           const q = line.points[k]!;
-          const readsQuality = line.quantity !== "temperature" && line.quantity !== "entropy";
+          const readsQuality = line.quantity !== "temperature" && line.quantity !== "entropy" && line.quantity !== "specific-volume";
           // Within 0.1 % of p_c the K-factors are within a few per cent of 1 and the split's vapour fraction
           // moves by δln K / (K − 1): a quality read back there tests the reader, not the line. Counted apart.
           if (readsQuality && q[1] > 0.999 * mix.envelope().critical.p) { critical++; continue; }
           const v = valueAt(mix, line, q);
           if (v === null) { refused++; continue; }
           if (v === "critical") { critical++; continue; }
-          let scale = line.quantity === "entropy" ? Math.abs(line.value) + 1e3 : 1;
+          let scale = line.quantity === "entropy" ? Math.abs(line.value) + 1e3 : line.quantity === "specific-volume" ? line.value : 1;
           if (readsQuality && q[1] > 0.995 * mix.envelope().critical.p) {
             const sat = mixtureSaturationP(mix, q[1], REF);
             scale = latentAtHalf / (sat.dew.h - sat.bubble.h);

@@ -1,5 +1,6 @@
-// The two-phase (p, h), (p, s) and (p, x) flashes by Newton on (ln K, T): their states against the independent
-// (T, x) and (T, p) flashes (substitution on K), across the dome, for a binary, a ternary and a quinary.
+// The two-phase (p, h), (p, s) and (p, x) flashes by Newton on (ln K, T), and (T, ρ) by Newton on (ln K, ln p):
+// their states against the independent (T, x) and (T, p) flashes (substitution on K), across the dome, for a
+// binary, a ternary and a quinary.
 import { describe, expect, it } from "vitest";
 import { getMixture, mixtureFlash } from "../../src/eos/mixture/index.js";
 
@@ -45,6 +46,28 @@ describe("two-phase (p, h) and (p, s) by Newton", () => {
           }
         }
       }
+    });
+  }
+  for (const id of ["R454B", "R407C-mix", "R448A"]) {
+    it(`${id}: (T, ρ) and (T, v) give the (T, x) and (T, p) states back`, () => {
+      const mix = getMixture(id);
+      const c = mix.envelope().critical;
+      for (const T of [230, 270, Math.min(320, c.T - 15)]) {
+        for (const q of [0.01, 0.3, 0.7, 0.99]) {
+          const a = mixtureFlash(mix, { T, x: q });
+          const b = mixtureFlash(mix, { T, rho: a.rho });
+          expect(Math.abs(b.p / a.p - 1)).toBeLessThan(1e-9);
+          expect(Math.abs(b.x! - q)).toBeLessThan(1e-8);
+          expect(b.phase).toBe("two-phase");
+        }
+        for (const p of [0.3e5, 40e5]) {
+          const a = mixtureFlash(mix, { T, p });
+          const b = mixtureFlash(mix, { T, v: a.v });
+          expect(Math.abs(b.p / p - 1)).toBeLessThan(1e-9);
+          expect(b.phase).toBe(a.phase);
+        }
+      }
+      expect(() => mixtureFlash(mix, { T: 300, rho: -1 })).toThrow(/rho/);
     });
   }
 });

@@ -5,12 +5,12 @@ import { solveLinear } from "./linear.js";
 import type { Mixture } from "./mixture.js";
 import { PhaseProbe } from "./phase-probe.js";
 import { mixturePropertiesTRho } from "./properties.js";
-import { rachfordRice } from "./rachford-rice.js";
+import { rachfordRice, splitSensitivities } from "./rachford-rice.js";
 
 const MAX_NEWTON = 24;
 
-/** Work arrays and the two phase probes of one mixture, reused between flashes. */
-class PhNewton {
+/** Work arrays and the two phase probes of one mixture, reused between flashes (never nested). */
+export class SplitWorkspace {
   readonly N: number;
   readonly L: PhaseProbe;
   readonly V: PhaseProbe;
@@ -46,7 +46,14 @@ class PhNewton {
   }
 }
 
-const solvers = new WeakMap<Mixture, PhNewton>();
+const solvers = new WeakMap<Mixture, SplitWorkspace>();
+
+/** The mixture's split workspace, made at first use. */
+export function splitWorkspace(mix: Mixture): SplitWorkspace {
+  let w = solvers.get(mix);
+  if (!w) solvers.set(mix, (w = new SplitWorkspace(mix)));
+  return w;
+}
 
 /** The starting point: T, ln K and phase densities the caller interpolated across the dome. */
 export interface NewtonStart {
@@ -84,8 +91,7 @@ export interface NewtonSplit {
  * two-phase region, a linear solve fails or the cap is reached.
  */
 export function newtonAtP(mix: Mixture, p: number, which: "h" | "s" | "x", target: number, start: NewtonStart): NewtonSplit | null {
-  let w = solvers.get(mix);
-  if (!w) solvers.set(mix, (w = new PhNewton(mix)));
+  const w = splitWorkspace(mix);
   const N = w.N, n1 = N + 1, z = mix.z, R = mix.model.R;
   const { L, V, lnK, x, y, K, dBeta, dx, dy, J, Jkeep, F, out } = w;
   for (let k = 0; k < N; k++) lnK[k] = start.lnK[k]!;
@@ -144,23 +150,7 @@ export function newtonAtP(mix: Mixture, p: number, which: "h" | "s" | "x", targe
     }
     if (fresh) {
       // Rachford–Rice sensitivities: dβ/d ln K_j, then dx_i/d ln K_j and dy_i/d ln K_j.
-      let gb = 0;
-      for (let k = 0; k < N; k++) {
-        const t = 1 + beta * (K[k]! - 1);
-        gb += (z[k]! * (K[k]! - 1) ** 2) / (t * t);
-      }
-      for (let j = 0; j < N; j++) {
-        const t = 1 + beta * (K[j]! - 1);
-        dBeta[j] = (z[j]! * K[j]!) / (t * t) / gb;
-      }
-      for (let i = 0; i < N; i++) {
-        const t = 1 + beta * (K[i]! - 1);
-        for (let j = 0; j < N; j++) {
-          const d = (-x[i]! / t) * ((K[i]! - 1) * dBeta[j]! + (i === j ? beta * K[i]! : 0));
-          dx[i * N + j] = d;
-          dy[i * N + j] = (i === j ? y[i]! : 0) + K[i]! * d;
-        }
-      }
+      splitSensitivities(z, K, beta, x, y, N, dBeta, dx, dy);
       for (let i = 0; i < N; i++) {
         for (let j = 0; j < N; j++) {
           let s = i === j ? 1 : 0;

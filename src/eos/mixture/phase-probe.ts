@@ -20,6 +20,9 @@ export class PhaseProbe {
   readonly dP: Float64Array;
   /** (∂ ln φᵢ/∂n_j)_T,p at Σn = 1, row-major (i, j); filled only when asked for. */
   readonly dn: Float64Array;
+  /** (∂ρ/∂n_j)_T,p at Σn = 1 [mol/m³], filled with dn; and (∂ρ/∂p)_T,n [mol/(m³ Pa)], after every eval. */
+  readonly dRhoDn: Float64Array;
+  dRhoDp = 0;
   private readonly g1: Float64Array;
   private readonly gRho: Float64Array;
   private readonly xp: Float64Array;
@@ -33,6 +36,7 @@ export class PhaseProbe {
     this.dT = new Float64Array(N);
     this.dP = new Float64Array(N);
     this.dn = new Float64Array(N * N);
+    this.dRhoDn = new Float64Array(N);
     this.g1 = new Float64Array(N);
     this.gRho = new Float64Array(N);
     this.xp = new Float64Array(N);
@@ -73,6 +77,7 @@ export class PhaseProbe {
     const hT = H_REL * T;
     residualChemicalPotentials(m, T + hT, rho, x, g1);
     const rhoT = -pT / pRho;
+    this.dRhoDp = 1 / pRho;
     for (let i = 0; i < N; i++) {
       this.dT[i] = (g1[i]! - mu0[i]!) / hT + (muRho[i]! + 1 / rho) * rhoT + 1 / T;
       this.dP[i] = (muRho[i]! + 1 / rho) / pRho - 1 / p;
@@ -85,6 +90,7 @@ export class PhaseProbe {
       for (let k = 0; k < N; k++) xp[k] = (x[k]! + (k === j ? H_REL : 0)) * inv;
       const Z = residualChemicalPotentials(m, T, rho, xp, g1);
       const rhoJ = -(rho * R * T * (Z - Z0)) / H_REL / pRho;
+      this.dRhoDn[j] = rhoJ;
       for (let i = 0; i < N; i++) this.dn[i * N + j] = (g1[i]! - mu0[i]!) / H_REL + (muRho[i]! + 1 / rho) * rhoJ;
     }
   }

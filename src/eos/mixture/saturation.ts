@@ -46,19 +46,19 @@ function result(mix: Mixture, kind: "bubble" | "dew"): SaturationPoint {
 }
 
 /**
- * A bubble or dew point at pressure p [Pa] read off the traced envelope by interpolation, without solving
+ * A bubble or dew point at T [K] or p [Pa] read off the traced envelope by interpolation, without solving
  * it: a starting value for solvers that carry the equilibrium conditions themselves. Undefined outside the
  * traced range.
  */
-export function estimatedSaturationPoint(mix: Mixture, kind: "bubble" | "dew", p: number): SaturationPoint | undefined {
+export function estimatedSaturationPoint(mix: Mixture, kind: "bubble" | "dew", given: "T" | "p", v: number): SaturationPoint | undefined {
   const env = mix.envelope();
-  const br = bracket(kind === "bubble" ? env.bubble : env.dew, "p", p);
+  const br = bracket(kind === "bubble" ? env.bubble : env.dew, given, v);
   if (!br) return undefined;
   const [a, b, f] = br;
   const lnK = new Float64Array(mix.N);
   for (let k = 0; k < mix.N; k++) lnK[k] = a.lnK[k]! + f * (b.lnK[k]! - a.lnK[k]!);
   return {
-    kind, T: Math.exp(Math.log(a.T) + f * (Math.log(b.T) - Math.log(a.T))), p,
+    kind, T: Math.exp(Math.log(a.T) + f * (Math.log(b.T) - Math.log(a.T))), p: Math.exp(Math.log(a.p) + f * (Math.log(b.p) - Math.log(a.p))),
     rhoFeed: a.rhoFeed + f * (b.rhoFeed - a.rhoFeed), rhoIncipient: a.rhoTrial + f * (b.rhoTrial - a.rhoTrial),
     incipient: new Float64Array(0), lnK,
   };

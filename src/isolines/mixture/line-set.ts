@@ -11,7 +11,7 @@ import type { CheckedOptions } from "../options.js";
 import { pageMapping, type PageMapping } from "../page.js";
 import { joinParts, traceCurve, type TraceSettings } from "../trace.js";
 import type { ChartWindow, Line, LineSet, Point, Quantity, TraceStats, UnitSystem } from "../types.js";
-import { givenValues, isenthalpValues, isentropeValues, qualityValues, type FamilyValue, type WindowRanges } from "../values.js";
+import { givenValues, isenthalpValues, isentropeValues, isochoreValues, qualityValues, type FamilyValue, type WindowRanges } from "../values.js";
 
 interface MixBuild {
   mix: Mixture;
@@ -148,6 +148,52 @@ function isotherm(b: MixBuild, T: number): Point[][] {
   return joinParts(b.mapping, parts);
 }
 
+/**
+ * The temperature where the feed's bubble (liquid side) or dew (vapour side) density equals ρ [mol/m³]:
+ * bracketed on the traced envelope side, then refined by secant steps on solved saturation points.
+ * Undefined where the isochore does not meet that side of the envelope.
+ */
+function crossingTemperature(b: MixBuild, rho: number): number | undefined {
+  const env = b.mix.envelope();
+  const kind = rho < env.critical.rho ? "dew" : "bubble";
+  const side = kind === "dew" ? env.dew : env.bubble;
+  let k = 0;
+  while (k + 1 < side.length && (side[k]!.rhoFeed - rho) * (side[k + 1]!.rhoFeed - rho) > 0) k++;
+  if (k + 1 >= side.length) return undefined;
+  const a = side[k]!, c = side[k + 1]!;
+  let T0 = a.T, T1 = c.T;
+  let g0 = Math.log(a.rhoFeed / rho), g1 = Math.log(c.rhoFeed / rho);
+  for (let it = 0; it < 12 && Math.abs(T1 - T0) > 1e-9 * T1 && g1 !== g0; it++) {
+    const T = Math.min(Math.max(T1 - g1 * (T1 - T0) / (g1 - g0), b.mix.Tmin), b.Tc);
+    const sat = attempt(() => mixtureSaturationT(b.mix, T, b.ref));
+    if (!sat) break;
+    T0 = T1; g0 = g1;
+    T1 = T; g1 = Math.log((kind === "dew" ? sat.dew.rho : sat.bubble.rho) / b.mix.M / rho);
+  }
+  return T1;
+}
+
+/**
+ * An isochore of specific volume v [m³/kg]: explicit in (T, ρ) above the temperature where it meets the
+ * envelope, and by (T, ρ) two-phase flashes below it, where the split's overall volume is v.
+ */
+function isochore(b: MixBuild, r: WindowRanges, v: number): Point[][] {
+  const rho = 1 / (v * b.mix.M);
+  const o = new Float64Array(12);
+  const Tx = crossingTemperature(b, rho);
+  const lo = r.Tlo, hi = r.Thi;
+  const parts: Point[][][] = [];
+  // Inside the dome only from the envelope's lowest traced temperature, where bubble and dew points exist.
+  const env = b.mix.envelope();
+  const lo2 = Math.max(lo, env.bubble[0]!.T, env.dew[0]!.T);
+  if (Tx !== undefined && Tx > lo2) {
+    parts.push(trace(b, (T) => point(attempt(() => mixtureFlash(b.mix, { T, v }, b.ref))), lo2, Math.min(Tx, hi)));
+  }
+  const from = Tx !== undefined ? Math.max(lo, Tx) : lo;
+  parts.push(trace(b, (T) => pointTRho(b, T, rho, o), from, hi));
+  return joinParts(b.mapping, parts.filter((q) => q.length > 0));
+}
+
 function isentrope(b: MixBuild, s: number): Point[][] {
   const [lo, hi] = lnRange(b, b.mapping.window.pMin * 0.999, b.pTop);
   return trace(b, (t) => point(attempt(() => mixtureFlash(b.mix, { p: Math.exp(t), s }, b.ref))), lo, hi);
@@ -177,7 +223,7 @@ function lines(b: MixBuild, q: Quantity, v: FamilyValue, pieces: Point[][]): Lin
   return pieces.map((points) => ({ quantity: q, value: v.si, unit: SI_UNIT[q], display: { ...display }, rank: v.rank, points }));
 }
 
-function values(b: MixBuild, family: "isotherms" | "isentropes" | "qualities" | "isenthalps", q: Quantity, auto: () => FamilyValue[]): FamilyValue[] {
+function values(b: MixBuild, family: "isotherms" | "isentropes" | "isochores" | "qualities" | "isenthalps", q: Quantity, auto: () => FamilyValue[]): FamilyValue[] {
   const given = b.opts.values[family];
   return given ? givenValues(b.opts.units, q, given) : auto();
 }
@@ -189,7 +235,7 @@ function isothermValues(b: MixBuild, r: WindowRanges): FamilyValue[] {
   return multiplesBetween(lo, hi, step).map((d) => ({ si: fromDisplay(u, "temperature", d), display: d, rank: "major" as const }));
 }
 
-/** The line set of a real mixture; isochores are not drawn for mixtures (the mixture flash has no (T, v) pair). */
+/** The line set of a real mixture: dome, quality lines, isotherms, isentropes, isochores and isenthalps. */
 export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet {
   const ref = opts.reference;
   const window = resolveMixtureWindow(mixtureAutoWindow(mix, ref, opts.units), opts.window, mix);
@@ -219,6 +265,10 @@ export function buildMixtureLineSet(mix: Mixture, opts: CheckedOptions): LineSet
       out.push(...lines(b, "temperature", v, isotherm(b, v.si)));
   }
   if (on.isentropes) for (const v of values(b, "isentropes", "entropy", () => isentropeValues(opts.units, r, d))) out.push(...lines(b, "entropy", v, isentrope(b, v.si)));
+  if (on.isochores) {
+    const vCritical = 1 / (env.critical.rho * mix.M);
+    for (const v of values(b, "isochores", "specific-volume", () => isochoreValues(vCritical, opts.units, r, d))) out.push(...lines(b, "specific-volume", v, isochore(b, r, v.si)));
+  }
   if (on.isenthalps) {
     for (const v of values(b, "isenthalps", "enthalpy", () => isenthalpValues(opts.units, mapping, d)).filter((v) => v.si >= window.hMin && v.si <= window.hMax))
       out.push(...lines(b, "enthalpy", v, [[[v.si, window.pMin], [v.si, window.pMax]]]));
