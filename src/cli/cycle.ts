@@ -222,7 +222,7 @@ export function registerCycle(program: Command, io: Io, setCode: (c: number) => 
   program
     .command("cycle")
     .description("a refrigeration cycle's states and performance, or the states of measured readings")
-    .argument("<fluid>", "fluid id, R-number, chemical name; single-stage also a blend id (R454B) or composition")
+    .argument("<fluid>", "fluid id, R-number, chemical name; single-stage and --economiser also a blend id (R454B) or composition")
     .option("--evaporating <level>", "evaporating temperature or pressure (e.g. -10C, 2.1bar, 20psig)")
     .option("--condensing <level>", "condensing temperature or pressure (subcritical cycles)")
     .option("--glide-point <point>", "for blends, where a temperature level sits in the glide: dew, bubble, mid", "dew")
@@ -251,7 +251,8 @@ export function registerCycle(program: Command, io: Io, setCode: (c: number) => 
     .addHelpText("after", `
 Models: single-stage (--condensing), with an internal heat exchanger (--ihx), two-stage
 (--flash-tank, --open-intercooler or --economiser), transcritical (--gas-cooler-outlet with --high-pressure or
---optimise-high-pressure). For blends a temperature level is read at the dew point unless
+--optimise-high-pressure). Real mixtures run single-stage or two-stage with --economiser (a flash tank or
+open intercooler would separate phases of different composition). For blends a temperature level is read at the dew point unless
 --glide-point says otherwise; superheat counts from the dew point, subcooling from the bubble point.
 JSON (SI): T K, p Pa, h J/kg, s J/(kg K), volumetric capacity J/m³, power W, mass flow kg/s, volume flow m³/s.
 

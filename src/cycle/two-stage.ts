@@ -1,6 +1,8 @@
 // Two-stage vapour compression with an intermediate pressure (default: geometric mean of evaporating
 // and condensing pressures): with a flash tank, an open flash intercooler, or an economiser (subcooler).
-import { flashPX, flashTP, type Fluid, type ReferenceName, type State } from "../eos/index.js";
+// Real mixtures run with the economiser, the one arrangement that keeps the circulating composition whole.
+import { DomeprintError } from "../errors.js";
+import type { ReferenceName, State } from "../eos/index.js";
 import { chainPoints, makePoint, type ChainStep } from "./chain.js";
 import { requireRefrigeratingEffect } from "./circuit-checks.js";
 import { cycleInputError, differenceText, pressureText, requireDifference, temperatureText } from "./check.js";
@@ -11,7 +13,8 @@ import { performanceOf, type Stage } from "./performance.js";
 import type { CyclePoint, Role } from "./point.js";
 import { mix, subcooledLiquid, superheatedVapour, throttle } from "./processes.js";
 import type { CycleResult } from "./result.js";
-import { commonInputs, commonNotes, levelText, lineDrops, requireBelow, type CommonSpec } from "./spec.js";
+import { commonNotes, levelText, lineDrops, requireBelow, workingInputs, type CommonSpec } from "./spec.js";
+import { glides, isMixture, statePX, stateTP, type WorkingFluid as Fluid } from "./working-fluid.js";
 
 /**
  * flash-tank: the tank's flash gas mixes with the low-stage discharge. open-intercooler: the low-stage
@@ -66,7 +69,7 @@ function commonStates(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Level
 
 /** Vapour fraction of a state on the tie line at its pressure: below 0 for subcooled liquid. */
 function vapourFraction(f: Fluid, st: State, ref: ReferenceName): number {
-  const hL = flashPX(f, st.p, 0, ref).h, hV = flashPX(f, st.p, 1, ref).h;
+  const hL = statePX(f, st.p, 0, ref).h, hV = statePX(f, st.p, 1, ref).h;
   return (st.h - hL) / (hV - hL);
 }
 
@@ -81,8 +84,8 @@ function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, 
   if (x >= 1) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the liquid would flash entirely to vapour in the flash tank", `an intermediate pressure above ${pressureText(L.evaporating.p)} where the condenser liquid stays partly liquid`);
   const flashes = x > 0;
   const highFlow = flashes ? 1 / (1 - x) : 1;
-  const tankLiquid = flashes ? flashPX(f, pi, 0, ref) : tankIn;
-  const tankVapour = flashPX(f, pi, 1, ref);
+  const tankLiquid = flashes ? statePX(f, pi, 0, ref) : tankIn;
+  const tankVapour = statePX(f, pi, 1, ref);
   const highSuction = flashes ? mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: tankVapour, flow: highFlow - 1 }], ref) : c.low.discharge;
   const high = compress(f, highSuction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
   const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
@@ -109,8 +112,8 @@ function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, 
 function openIntercooler(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, dischargeDrop: number): Built {
   const pi = L.intermediate.p;
   const tankIn = throttle(f, c.condOut, pi, ref);
-  const tankLiquid = flashPX(f, pi, 0, ref);
-  const tankVapour = flashPX(f, pi, 1, ref);
+  const tankLiquid = statePX(f, pi, 0, ref);
+  const tankVapour = statePX(f, pi, 1, ref);
   if (!(c.condOut.h < tankVapour.h)) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the condenser liquid would arrive in the tank as vapour", "an intermediate level where the condenser liquid stays partly liquid");
   const highFlow = (c.low.discharge.h - tankLiquid.h) / (tankVapour.h - c.condOut.h);
   const high = compress(f, tankVapour, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
@@ -139,8 +142,8 @@ function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels,
     throw cycleInputError("economiser-approach", approach, differenceText(approach), `the liquid would leave the economiser at ${temperatureText(Tout)}, not colder than it enters (${temperatureText(c.condOut.T)})`,
       `less than ${differenceText(c.condOut.T - injIn.T)}, or a lower intermediate level`);
   }
-  const liquidOut = flashTP(f, Tout, L.condensing.p, ref);
-  const injOut = flashPX(f, pi, 1, ref);
+  const liquidOut = stateTP(f, Tout, L.condensing.p, ref);
+  const injOut = statePX(f, pi, 1, ref);
   if (!(injOut.h > injIn.h)) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the condenser liquid would reach the economiser as vapour", "an intermediate level where the injected liquid can still evaporate");
   const injFlow = (c.condOut.h - liquidOut.h) / (injOut.h - injIn.h);
   const highFlow = 1 + injFlow;
@@ -173,7 +176,13 @@ function lowSteps(c: Common): ChainStep[] {
 }
 
 export function twoStageCycle(spec: TwoStageSpec): CycleResult {
-  const { f, ref, superheat, capacity } = commonInputs(spec, "a two-stage cycle");
+  const { f, ref, superheat, capacity } = workingInputs(spec);
+  if (isMixture(f) && spec.arrangement !== "economiser") {
+    // A tank separates liquid from vapour; a zeotrope's two differ in composition, so the low stage would
+    // circulate a shifted composition that a model of fixed overall composition cannot follow.
+    throw new DomeprintError("E_UNSUPPORTED", `arrangement = ${JSON.stringify(spec.arrangement)}: a ${spec.arrangement} separates the liquid and vapour of the real mixture ${f.id}, whose compositions differ, and the fixed-composition model cannot follow the shifted circulation; allowed: economiser for a real mixture, or the pseudo-pure blend equation where there is one`,
+      { input: "arrangement", value: spec.arrangement, allowed: "economiser (real mixtures)" });
+  }
   const subcooling = requireDifference("subcooling", spec.subcooling ?? 0);
   const L = resolveLevels(f, spec);
   const drops = lineDrops(spec, L.evaporating.p, L.condensing.p);
@@ -198,7 +207,7 @@ export function twoStageCycle(spec: TwoStageSpec): CycleResult {
   path.pop();
   const result: CycleResult = {
     model: `two-stage-${spec.arrangement}`,
-    fluid: f.id, blend: f.pseudoPure, reference: ref, levels: L, superheat, subcooling, drops,
+    fluid: f.id, blend: glides(f), reference: ref, levels: L, superheat, subcooling, drops,
     notes: [...commonNotes(f), ...stageNotes(spec), ...b.notes],
     points, auxiliary: stages.map((s) => s.isentropic), stages, performance, path,
     branches: side.points.length ? [branchPath(f, ref, b, main.points, side.points, side.legs)] : [],
