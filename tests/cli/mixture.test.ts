@@ -51,13 +51,15 @@ describe("domeprint props with a real mixture", () => {
     expect(rel(b.p, a.p)).toBeLessThan(0.03);
   });
   it("--batch: one line per input, errors as lines, pairs a mixture cannot take named", () => {
-    const r = cli(["props", "R454B", "--batch"], { input: '{"p": 1e6, "h": 3e5}\n{"p": 1e6, "rho": 3}\n' });
+    const r = cli(["props", "R454B", "--batch"], { input: '{"p": 1e6, "h": 3e5}\n{"p": 1e6, "rho": 3}\n{"T": 280, "rho": 50}\n' });
     expect(r.code).toBe(0);
     const lines = r.out.trim().split("\n").map((l) => JSON.parse(l));
     expect(lines[0].phase).toBe("two-phase");
     expect(lines[0].liquid.massFractions).toHaveLength(2);
-    expect(lines[1].code).toBe("E_UNKNOWN_QUANTITY");
-    expect(lines[1].error).toMatch(/rho: unknown quantity for a mixture; allowed: T, p, h, s, x/);
+    expect(lines[1].code).toBe("E_UNSUPPORTED");
+    expect(lines[1].error).toMatch(/inputs = p,rho: this pair is not supported for mixtures; allowed pairs: T,p; p,h; p,s; p,x; T,x; T,rho; T,v/);
+    expect(lines[2].phase).toBe("two-phase");
+    expect(Math.abs(lines[2].rho - 50)).toBeLessThan(1e-9 * 50);
   });
   it("unknown name: one error, exit 2, suggestions from fluids and blends", () => {
     const r = cli(["props", "R454", "T=0C", "p=5bar"]);
