@@ -70,4 +70,21 @@ describe("two-phase (p, h) and (p, s) by Newton", () => {
       expect(() => mixtureFlash(mix, { T: 300, rho: -1 })).toThrow(/rho/);
     });
   }
+  it("R513A through its azeotropic point (the glide passes zero near 8.2 bar): (p, x) solves and agrees with (T, x)", () => {
+    // Internal: with β an unknown the split stays regular where every K passes 1; the band of 8.15–8.40 bar
+    // failed while β was solved from the K-factors (Rachford–Rice has no root there).
+    const mix = getMixture("R513A");
+    let solved = 0;
+    for (let i = 0; i <= 60; i++) {
+      const p = 7.5e5 + i * 2.5e3;
+      for (const q of [0.1, 0.5, 0.9]) {
+        const st = mixtureFlash(mix, { p, x: q });
+        expect(Math.abs(st.x! - q), `${p} Pa, x = ${q}`).toBeLessThan(1e-8);
+        const back = mixtureFlash(mix, { T: st.T, x: q });
+        expect(Math.abs(back.p / p - 1), `${p} Pa, x = ${q}`).toBeLessThan(1e-6);
+        solved++;
+      }
+    }
+    expect(solved).toBe(183);
+  });
 });

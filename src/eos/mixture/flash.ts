@@ -8,8 +8,7 @@ import { checkReferenceName, type ReferenceName, type ReferenceOffset } from "..
 import type { Phase } from "../state.js";
 import { mixtureDensityTP } from "./density.js";
 import type { Mixture } from "./mixture.js";
-import { newtonAtP } from "./flash-newton.js";
-import { newtonAtTV } from "./flash-volume.js";
+import { splitNewton } from "./split-newton.js";
 import { mixturePropertiesTRho } from "./properties.js";
 import { mixtureReferenceOffset } from "./reference.js";
 import { estimatedSaturationPoint, saturationPoint, type SaturationPoint } from "./saturation.js";
@@ -157,9 +156,10 @@ function twoPhaseAtP(mix: Mixture, p: number, bub: SaturationPoint, dew: Saturat
 }
 
 /**
- * The two-phase (p, h), (p, s) or (p, x) state by Newton on (ln K, T) together, started a fraction fT of the
- * way from the bubble to the dew point (where the target falls linearly between them); `target` is molar
- * for h and s, a mass fraction for x. Null when it does not converge (the caller then brackets in T).
+ * The two-phase (p, h), (p, s) or (p, x) state by Newton on (ln K, T, β) together (split-newton.ts), started
+ * a fraction fT of the way from the bubble to the dew point (where the target falls linearly between them);
+ * `target` is molar for h and s, a mass fraction for x. Null when it does not converge (the caller then
+ * brackets in T).
  */
 function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, fT: number, which: Target | "x", target: number,
   stallTolerance: number, ref: ReferenceName, off: ReferenceOffset, margin = 0): MixtureState | null {
@@ -167,9 +167,9 @@ function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: Satu
   const f = 1 - fT;
   const lnK = new Float64Array(mix.N);
   for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
-  const r = newtonAtP(mix, p, which, target, {
-    T: T0, lnK, rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, Tlo: bub.T - margin, Thi: dew.T + margin,
-    stallTolerance,
+  const r = splitNewton(mix, { fixed: "p", p, which, target }, {
+    free: T0, lo: bub.T - margin, hi: dew.T + margin, lnK, beta: fT,
+    rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance,
   });
   if (!r) return null;
   return mixtureTwoPhaseState(mix, r.T, p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
@@ -277,6 +277,15 @@ function flashTX(mix: Mixture, T: number, q: number, ref: ReferenceName, off: Re
   const bub = saturationPoint(mix, "bubble", "T", T), dew = saturationPoint(mix, "dew", "T", T);
   if (q === 0) return saturatedState(mix, bub, ref, off);
   if (q === 1) return saturatedState(mix, dew, ref, off);
+  // Newton on (ln K, ln p, β) from the split interpolated at the quality, then the bracketed search.
+  const f = 1 - q;
+  const lnK = new Float64Array(mix.N);
+  for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
+  const r = attempt(() => splitNewton(mix, { fixed: "T", T, which: "x", target: q }, {
+    free: Math.exp(Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p))), lo: dew.p, hi: bub.p, lnK, beta: q,
+    rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance: 1e-10,
+  }));
+  if (r) return mixtureTwoPhaseState(mix, T, r.p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
   let st: MixtureState | undefined;
   // Quality falls as p rises from the dew to the bubble pressure; solved in ln p.
   const g = (lnp: number, warm: boolean) => {
@@ -292,8 +301,8 @@ function flashTX(mix: Mixture, T: number, q: number, ref: ReferenceName, off: Re
 
 /**
  * The state at T [K] and density ρ [kg/m³] of the feed: one phase outside the bubble and dew densities at T
- * (and above the critical temperature), else the split whose overall volume is 1/ρ, by Newton on (ln K, ln p)
- * (flash-volume.ts), with a bracketed search in ln p on (T, p) splits as the fallback.
+ * (and above the critical temperature), else the split whose overall volume is 1/ρ, by Newton on (ln K, ln p, β)
+ * (split-newton.ts), with a bracketed search in ln p on (T, p) splits as the fallback.
  */
 function flashTRho(mix: Mixture, T: number, rhoMass: number, ref: ReferenceName, off: ReferenceOffset): MixtureState {
   checkT(mix, T);
@@ -313,9 +322,9 @@ function flashTRho(mix: Mixture, T: number, rhoMass: number, ref: ReferenceName,
     const f = 1 - (v - vb) / (vd - vb); // weight of the bubble end
     const lnK = new Float64Array(mix.N);
     for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
-    const r = attempt(() => newtonAtTV(mix, T, v, {
-      p: Math.exp(Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p))), lnK, plo: dew.p / margin, phi: bub.p * margin,
-      rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed,
+    const r = attempt(() => splitNewton(mix, { fixed: "T", T, which: "v", target: v }, {
+      free: Math.exp(Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p))), lo: dew.p / margin, hi: bub.p * margin, lnK, beta: 1 - f,
+      rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance: 1e-11 * v,
     }));
     return r ? mixtureTwoPhaseState(mix, T, r.p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off) : null;
   };

@@ -38,27 +38,3 @@ export function rachfordRice(z: ArrayLike<number>, K: ArrayLike<number>, N: numb
   return b;
 }
 
-/**
- * Sensitivities of a split to its K-factors, for Newton iterations on ln K: dβ/d ln K_j into dBeta[j], and
- * dxᵢ/d ln K_j, dyᵢ/d ln K_j into dx[i·N + j], dy[i·N + j], with x = z/(1 + β(K − 1)) and y = K x.
- */
-export function splitSensitivities(z: ArrayLike<number>, K: ArrayLike<number>, beta: number, x: ArrayLike<number>, y: ArrayLike<number>, N: number,
-  dBeta: Float64Array, dx: Float64Array, dy: Float64Array): void {
-  let gb = 0;
-  for (let k = 0; k < N; k++) {
-    const t = 1 + beta * (K[k]! - 1);
-    gb += (z[k]! * (K[k]! - 1) ** 2) / (t * t);
-  }
-  for (let j = 0; j < N; j++) {
-    const t = 1 + beta * (K[j]! - 1);
-    dBeta[j] = (z[j]! * K[j]!) / (t * t) / gb;
-  }
-  for (let i = 0; i < N; i++) {
-    const t = 1 + beta * (K[i]! - 1);
-    for (let j = 0; j < N; j++) {
-      const d = (-x[i]! / t) * ((K[i]! - 1) * dBeta[j]! + (i === j ? beta * K[i]! : 0));
-      dx[i * N + j] = d;
-      dy[i * N + j] = (i === j ? y[i]! : 0) + K[i]! * d;
-    }
-  }
-}
