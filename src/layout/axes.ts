@@ -3,6 +3,7 @@
 
 import type { Mark, Stroke } from "./scene.js";
 import type { AxisTicks, MarkedValue } from "./axis-ticks.js";
+import { UNITS } from "../units/index.js";
 import { toDisplay, type DisplayUnits } from "./display-units.js";
 import { segment, text } from "./marks.js";
 import type { PagePlan } from "./plan.js";
@@ -60,7 +61,9 @@ export function axesMarks(ticks: AxisTicks, scales: ChartScales, units: DisplayU
   if (ticks.dew && plan.rules.dew !== undefined)
     marks.push(...verticalScaleMarks({ ...extent, rule: plan.rules.dew, side: "right", ticks: marked(ticks.dew), title: `dew-point temperature, ${t}`, drawRule: true }, plan));
   if (ticks.gauge && plan.rules.gauge !== undefined) {
-    const where = options.altitude === undefined ? "" : ` at ${formatNumber(options.altitude, 5)} m`;
+    // The site's altitude in the sheet's own units: feet on an inch-pound sheet, metres otherwise.
+    const length = UNITS.length[units.system === "ip" ? "ft" : "m"]!;
+    const where = options.altitude === undefined ? "" : ` at ${formatNumber(toDisplay(options.altitude, length), 5)} ${length.symbol}`;
     const unit = `${units.pressure.symbol}(g)`.replace("psi(g)", "psig");
     marks.push(...verticalScaleMarks({ ...extent, rule: plan.rules.gauge, side: "left", ticks: marked(ticks.gauge), title: `gauge pressure${where}, ${unit}`, drawRule: true }, plan));
   }

@@ -85,6 +85,14 @@ describe("R-134a sheet, A4 landscape, as SVG", async () => {
     expect(invert(meta.axes.y, right[0]!.y) / saturationT(getFluid("R134a"), 273.15).pL).toBeCloseTo(1, 4);
   });
 
+  it("names the gauge scale's site altitude in the sheet's units: metres here, feet on an inch-pound sheet", async () => {
+    const axes = sheet.scene.layers.find((l) => l.id === "axes")!.marks;
+    expect(axes.some((m) => m.kind === "text" && m.text === "gauge pressure at 300 m, bar(g)")).toBe(true);
+    const ip = await renderSheet({ fluid: "R134a", paper: "A4", units: "ip", formats: ["svg"], date: "2025-03-14", gauge: true, altitude: 304.8 });
+    const ipAxes = ip.scene.layers.find((l) => l.id === "axes")!.marks;
+    expect(ipAxes.some((m) => m.kind === "text" && m.text === "gauge pressure at 1000 ft, psig")).toBe(true); // 304.8 m = 1000 ft exactly
+  });
+
   it("keeps the user's text, markup characters and all, as real text", () => {
     expect(svg).toContain("Plant &lt;3&gt; &amp; &quot;Kältezentrale&quot; — Ωμέγα / Холод");
     const texts = Array.from(root.getElementsByTagName("text")).map((t) => t.textContent);
