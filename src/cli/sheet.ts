@@ -4,6 +4,7 @@
 import type { Command } from "commander";
 import { DomeprintError } from "../errors.js";
 import { checkReferenceName } from "../eos/index.js";
+import { USER_FIELDS } from "../layout/content.js";
 import { checkPressureUnit, checkUnitSystem } from "../layout/display-units.js";
 import { paperNames, type Orientation } from "../layout/paper.js";
 import { styleNames } from "../layout/style-file.js";
@@ -60,7 +61,7 @@ export function sheetOptions(fluid: string, f: Flags): SheetOptions {
   const dpi = numberOf("--dpi", f.dpi, "dpi");
   const bleed = numberOf("--bleed", f.bleed, "mm");
   const margin = numberOf("--margin", f.margin, "mm");
-  const fields = { title: f.title, site: f.site, client: f.client, author: f.author, revision: f.revision, notes: f.notes };
+  const fields = Object.fromEntries(USER_FIELDS.map((k) => [k, f[k]]));
   return {
     fluid,
     ...(f.paper !== undefined ? { paper: f.paper } : {}),

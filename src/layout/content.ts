@@ -51,14 +51,10 @@ export interface FluidIdentity {
   estimatedPairs?: string;
 }
 
-export interface UserFields {
-  title?: string;
-  site?: string;
-  client?: string;
-  author?: string;
-  revision?: string;
-  notes?: string;
-}
+/** The free-text fields a user may set on a sheet's title block, in the order they are printed. */
+export const USER_FIELDS = ["title", "site", "client", "author", "revision", "notes"] as const;
+export type UserFieldName = (typeof USER_FIELDS)[number];
+export type UserFields = Partial<Record<UserFieldName, string>>;
 
 export interface SheetContent {
   fluid: FluidIdentity;

@@ -5,7 +5,7 @@ import type { Overlay } from "../cycle/overlay.js";
 import { checkReferenceName, type ReferenceName } from "../eos/index.js";
 import { inputError } from "../errors.js";
 import { checkPressureUnit, checkUnitSystem, type PressureUnitName, type UnitSystem } from "../layout/display-units.js";
-import type { UserFields } from "../layout/content.js";
+import { USER_FIELDS, type UserFields } from "../layout/content.js";
 import type { Orientation } from "../layout/paper.js";
 import type { Style } from "../layout/style.js";
 import type { LineSetOptions } from "../isolines/index.js";
@@ -103,7 +103,7 @@ export interface CheckedSheetOptions {
 
 function checkFields(fields: UserFields | undefined): UserFields {
   const out: UserFields = {};
-  for (const key of ["title", "site", "client", "author", "revision", "notes"] as const) {
+  for (const key of USER_FIELDS) {
     const v = fields?.[key];
     if (v === undefined) continue;
     if (typeof v !== "string") throw inputError(key, v, "not text", "a string");

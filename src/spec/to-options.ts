@@ -7,6 +7,7 @@ import { flashTP, resolveSubstance, type Fluid, type ReferenceName, type Substan
 import { cycleOverlay } from "../cycle/index.js";
 import type { Overlay } from "../cycle/overlay.js";
 import { runCycle } from "../cli/cycle.js";
+import { USER_FIELDS } from "../layout/content.js";
 import { checkPressureUnit } from "../layout/display-units.js";
 import { resolvePaper } from "../layout/paper.js";
 import { loadStyle } from "../layout/style-file.js";
@@ -183,7 +184,7 @@ export function planSheets(spec: LoadedSpec): PlannedSheet[] {
       return n;
     };
     const bleed = mm("bleed"), margin = mm("margin");
-    const fields = Object.fromEntries((["title", "site", "client", "author", "revision", "notes"] as const).filter((k) => e[k] !== undefined).map((k) => [k, e[k]!]));
+    const fields = Object.fromEntries(USER_FIELDS.filter((k) => e[k] !== undefined).map((k) => [k, e[k]!]));
     const options: SheetOptions = {
       fluid: fluidId,
       ...(e.paper !== undefined ? { paper: e.paper } : {}),
