@@ -39,6 +39,8 @@ export interface Panel {
 interface Ctx {
   style: PanelStyle;
   width: number;
+  /** Lines a table cell may wrap onto before the last is cut short with an ellipsis. */
+  cellLines: number;
 }
 
 const inner = (c: Ctx) => c.width - 2 * c.style.padding;
@@ -132,56 +134,71 @@ function setItems(panel: Panel, c: Ctx, x: number, y: number, out: Mark[] | unde
 
 /**
  * Column widths that fill the panel: spare width is shared out evenly; when the table is too wide, the
- * widest columns give way first (water-filling), and their cells are shortened with an ellipsis.
+ * widest columns give way first (water-filling), down to their `minimum` where one is given (the longest
+ * word of a column whose cells wrap); only when even the minimums do not fit do all columns share alike.
  */
-export function fitColumns(natural: number[], width: number): number[] {
+export function fitColumns(natural: number[], width: number, minimum: number[] = natural.map(() => 0)): number[] {
   const total = natural.reduce((a, b) => a + b, 0);
   if (total <= width) return natural.map((w) => w + (width - total) / natural.length);
-  let cap = width / natural.length;
-  // Raise the cap until the columns under it plus the capped ones fill the width.
-  const sorted = [...natural].sort((a, b) => a - b);
-  let used = 0;
-  for (let i = 0; i < sorted.length; i++) {
-    const rest = sorted.length - i;
-    const share = (width - used) / rest;
-    if (sorted[i]! > share) {
-      cap = share;
-      break;
-    }
-    used += sorted[i]!;
-    cap = sorted[i]!;
+  const floor = natural.map((w, j) => Math.min(w, minimum[j] ?? 0));
+  if (floor.reduce((a, b) => a + b, 0) >= width) return fitColumns(natural, width);
+  // The cap c with Σ max(floor, min(natural, c)) = width, by bisection (the sum rises with c).
+  const sum = (c: number) => natural.reduce((a, w, j) => a + Math.max(floor[j]!, Math.min(w, c)), 0);
+  let lo = 0, hi = Math.max(...natural);
+  for (let k = 0; k < 60; k++) {
+    const mid = 0.5 * (lo + hi);
+    if (sum(mid) > width) hi = mid; else lo = mid;
   }
-  return natural.map((w) => Math.min(w, cap));
+  return natural.map((w, j) => Math.max(floor[j]!, Math.min(w, lo)));
 }
 
+/** The widest word of each column (a right-set column keeps whole cells): the narrowest it may be set. */
+function tableMinimums(item: Extract<PanelItem, { kind: "table" }>, pt: number): number[] {
+  const gap = textWidth("00", pt);
+  const widest = (cell: string, weight: "normal" | "bold", whole: boolean) =>
+    whole ? textWidth(cell, pt, weight) : Math.max(0, ...cell.split(/\s+/).map((w) => textWidth(w, pt, weight)));
+  return item.columns.map((c, j) => {
+    const whole = item.align[j] === "end";
+    return Math.max(widest(c, "bold", whole), widest(item.units[j] ?? "", "normal", whole), ...item.rows.map((r) => widest(r[j] ?? "", "normal", whole))) + gap;
+  });
+}
+
+/** Wraps a cell onto at most `max` lines; a longer text ends its last line with an ellipsis. */
+function cellLines(content: string, pt: number, width: number, weight: "normal" | "bold", max: number): string[] {
+  if (textWidth(content, pt, weight) <= width) return [content]; // as written, leading spaces (indents) kept
+  const lines = wrap(content, pt, width, weight);
+  if (lines.length <= max) return lines;
+  return [...lines.slice(0, max - 1), fit(lines.slice(max - 1).join(" "), pt, width, weight)];
+}
+
+/** A table whose cells wrap within their columns up to c.cellLines lines: each row as tall as its longest cell. */
 function setTable(item: Extract<PanelItem, { kind: "table" }>, c: Ctx, x: number, y: number, out: Mark[] | undefined): number {
   const s = c.style;
   const pt = s.pt;
   const lh = lineHeight(pt);
-  const cols = fitColumns(tableWidths(item, pt), inner(c));
-  const cell = (row: string[], top: number, weight: "normal" | "bold", colour: string) => {
+  const fig = textWidth("0", pt);
+  const cols = fitColumns(tableWidths(item, pt), inner(c), tableMinimums(item, pt));
+  /** Sets one row from `top` (or only measures it without `out`); returns its height. */
+  const row = (cells: string[], top: number, weight: "normal" | "bold", colour: string, stripe: boolean) => {
+    const lines = cells.map((content, j) => cellLines(content, pt, cols[j]! - 1.5 * fig, weight, c.cellLines));
+    const height = lh * Math.max(1, ...lines.map((l) => l.length));
+    if (stripe) out?.push(rect(x, top, inner(c), height, { colour: s.stripe }));
     let left = x;
-    row.forEach((content, j) => {
+    lines.forEach((ls, j) => {
       const w = cols[j]!;
       const right = item.align[j] === "end";
-      const shown = fit(content, pt, w - 1.5 * textWidth("0", pt), weight);
       // Right-set cells stop a figure's width short of the next column, so neighbours never touch.
-      out?.push(text(right ? left + w - textWidth("0", pt) : left, top + lh * 0.78, shown, pt, colour, { weight, ...(right ? { anchor: "end" } : {}) }));
+      ls.forEach((l, k) => out?.push(text(right ? left + w - fig : left, top + lh * (k + 0.78), l, pt, colour, { weight, ...(right ? { anchor: "end" } : {}) })));
       left += w;
     });
+    return height;
   };
   let cursor = y;
-  cell(item.columns, cursor, "bold", s.ink);
-  cursor += lh;
-  if (item.units.some((u) => u !== "")) {
-    cell(item.units, cursor, "normal", s.muted);
-    cursor += lh;
-  }
+  cursor += row(item.columns, cursor, "bold", s.ink, false);
+  if (item.units.some((u) => u !== "")) cursor += row(item.units, cursor, "normal", s.muted, false);
   out?.push(segment(x, cursor, x + inner(c), cursor, { ...s.stroke }));
-  item.rows.forEach((row, i) => {
-    if (i % 2 === 1) out?.push(rect(x, cursor, inner(c), lh, { colour: s.stripe }));
-    cell(row, cursor, "normal", s.ink);
-    cursor += lh;
+  item.rows.forEach((r, i) => {
+    cursor += row(r, cursor, "normal", s.ink, i % 2 === 1);
   });
   return cursor - y;
 }
@@ -190,15 +207,16 @@ function titleHeight(style: PanelStyle): number {
   return lineHeight(style.titlePt) + style.padding;
 }
 
-export function panelHeight(panel: Panel, style: PanelStyle, width: number): number {
-  return titleHeight(style) + setItems(panel, { style, width }, 0, 0, undefined) + 2 * style.padding;
+/** Height of a panel set at this width; its table cells wrap onto at most `cellLines` lines. */
+export function panelHeight(panel: Panel, style: PanelStyle, width: number, cellLines = 1): number {
+  return titleHeight(style) + setItems(panel, { style, width, cellLines }, 0, 0, undefined) + 2 * style.padding;
 }
 
-export function drawPanel(panel: Panel, style: PanelStyle, x: number, y: number, width: number, height: number): Mark[] {
+export function drawPanel(panel: Panel, style: PanelStyle, x: number, y: number, width: number, height: number, cellLines = 1): Mark[] {
   const marks: Mark[] = [rect(x, y, width, height, { colour: style.fill }, style.stroke)];
   const band = titleHeight(style);
   marks.push(rect(x, y, width, band, { colour: style.titleFill }));
   marks.push(text(x + style.padding, y + band / 2, fit(panel.title, style.titlePt, width - 2 * style.padding, "bold"), style.titlePt, style.titleInk, { weight: "bold", baseline: "middle" }));
-  setItems(panel, { style, width }, x + style.padding, y + band + style.padding, marks);
+  setItems(panel, { style, width, cellLines }, x + style.padding, y + band + style.padding, marks);
   return marks;
 }

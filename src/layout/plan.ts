@@ -20,11 +20,17 @@ export interface PlanOptions {
   margin?: number;
   /** The panels include a saturation table: a portrait band is made taller to hold it. */
   table?: boolean;
-  /** Height (mm) the band under the plot needs for overlay tables (readings, cycle states) at a given width. */
-  overlayBand?: (width: number) => number;
+  /**
+   * Height (mm) the band under the plot needs for overlay tables (readings, cycle states) at a given width,
+   * kept within maxHeight where it can be (table cells then wrap onto fewer lines).
+   */
+  overlayBand?: (width: number, maxHeight: number) => number;
   /** Share of the inner page the panels take: the column's width (landscape) or the band's height (portrait). */
   panelShare?: number;
 }
+
+/** The overlay tables' band may take at most this share of the plot's height before their cells wrap less. */
+const MAX_BAND_SHARE = 0.35;
 
 /** The panels' usual share of the page; small paper may need more (see PANEL_SHARES). */
 export function defaultPanelShare(landscape: boolean, table: boolean): number {
@@ -109,7 +115,7 @@ export function planPage(options: PlanOptions): PagePlan {
     plotOuter = { x: inner.x, y: inner.y, width: inner.width, height: inner.height - height - gap };
   }
   // Overlay tables are wide (ten columns of readings), so they take a band under the plot, not the panel column.
-  const bandHeight = options.overlayBand ? options.overlayBand(plotOuter.width) : 0;
+  const bandHeight = options.overlayBand ? options.overlayBand(plotOuter.width, MAX_BAND_SHARE * plotOuter.height) : 0;
   const band = bandHeight > 0 ? bandHeight + gap : 0;
   const overlayBand = { x: plotOuter.x, y: plotOuter.y + plotOuter.height - bandHeight, width: plotOuter.width, height: bandHeight };
   const plot = { x: plotOuter.x + left, y: plotOuter.y + top, width: plotOuter.width - left - right, height: plotOuter.height - top - bottom - band };

@@ -154,7 +154,10 @@ export function layoutSheet(plan: PagePlan, content: SheetContent, style: Style)
     { id: "labels", label: "Line labels", marks: labelMarks },
     { id: "frame", label: "Plot frame", marks: [rect(frame.x, frame.y, frame.width, frame.height, undefined, frameStroke)] },
     { id: "axes", label: "Axes and scales", marks: axesMarks(ticks, scales, units, plan, axisInk, { glide: fluid.glide, ...(content.gauge ? { altitude: content.gauge.altitude } : {}) }) },
-    { id: "panels", label: "Panels", marks: [...arrangement.placed, ...overlayTables].flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height)) },
+    { id: "panels", label: "Panels", marks: [
+      ...arrangement.placed.flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height)),
+      ...overlayTables.flatMap((p) => drawPanel(p.panel, arrangement.style, p.rect.x, p.rect.y, p.rect.width, p.rect.height, p.cellLines)),
+    ] },
   ];
   const scene: Scene = {
     width: plan.width,
@@ -179,6 +182,9 @@ interface OverlayRow {
   height: number;
 }
 
+/** Overlay table cells wrap onto up to this many lines, fewer where the band would crowd the chart. */
+const CELL_LINES = [3, 2, 1] as const;
+
 /** No overlay table claims more than half the band, so a table with one long note shares its row. */
 const MAX_TABLE_SHARE = 0.5;
 /** Tables in one row may be squeezed to this share of their natural widths before a new row starts. */
@@ -186,9 +192,10 @@ const SQUEEZE = 0.8;
 
 /**
  * Overlay tables in rows across the band: as many side by side as fit (squeezed a little if need be),
- * the rest on further rows; within a row the widest give way first, long cells ending in an ellipsis.
+ * the rest on further rows; within a row the widest give way first, their long cells wrapping onto up to
+ * `cellLines` lines, the last ending in an ellipsis if need be.
  */
-function overlayRows(panels: Panel[], style: PanelStyle, width: number, gap: number): OverlayRow[] {
+function overlayRows(panels: Panel[], style: PanelStyle, width: number, gap: number, cellLines: number): OverlayRow[] {
   const natural = panels.map((p) => {
     const item = p.items.find((i) => i.kind === "table");
     return Math.min(item && item.kind === "table" ? tableWidth(item, style) : width, width * MAX_TABLE_SHARE);
@@ -204,18 +211,32 @@ function overlayRows(panels: Panel[], style: PanelStyle, width: number, gap: num
   });
   return rows.map((row) => {
     const widths = fitColumns(row.natural, width - gap * (row.panels.length - 1));
-    return { panels: row.panels, widths, height: Math.max(...row.panels.map((p, i) => panelHeight(p, style, widths[i]!))) };
+    return { panels: row.panels, widths, height: Math.max(...row.panels.map((p, i) => panelHeight(p, style, widths[i]!, cellLines))) };
   });
 }
 
-function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): PlacedPanel[] {
+function bandHeight(rows: OverlayRow[], gap: number): number {
+  return rows.reduce((sum, row, i) => sum + row.height + (i > 0 ? gap : 0), 0);
+}
+
+/** The rows with the most lines per cell whose band fits `maxHeight` (one line per cell if none does). */
+function overlayRowsWithin(panels: Panel[], style: PanelStyle, width: number, gap: number, maxHeight: number): { rows: OverlayRow[]; cellLines: number } {
+  for (const cellLines of CELL_LINES) {
+    const rows = overlayRows(panels, style, width, gap, cellLines);
+    if (bandHeight(rows, gap) <= maxHeight * (1 + 1e-9) || cellLines === 1) return { rows, cellLines };
+  }
+  throw new Error("unreachable: CELL_LINES ends with 1");
+}
+
+function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle): (PlacedPanel & { cellLines: number })[] {
   const band = plan.overlayBand;
-  const placed: PlacedPanel[] = [];
+  const placed: (PlacedPanel & { cellLines: number })[] = [];
   let y = band.y;
-  for (const row of overlayRows(panels, style, band.width, plan.gap)) {
+  const { rows, cellLines } = overlayRowsWithin(panels, style, band.width, plan.gap, band.height);
+  for (const row of rows) {
     let x = band.x;
     row.panels.forEach((panel, i) => {
-      placed.push({ panel, rect: { x, y, width: row.widths[i]!, height: row.height } });
+      placed.push({ panel, rect: { x, y, width: row.widths[i]!, height: row.height }, cellLines });
       x += row.widths[i]! + plan.gap;
     });
     y += row.height + plan.gap;
@@ -223,13 +244,16 @@ function placeOverlayPanels(panels: Panel[], plan: PagePlan, style: PanelStyle):
   return placed;
 }
 
-/** The height overlay tables need in a band of the given width, at the style's panel type on this paper. */
-export function overlayBandHeight(style: Style, page: { width: number; height: number }, overlays: Overlay[]): (width: number) => number {
+/**
+ * The height overlay tables need in a band of the given width, at the style's panel type on this paper:
+ * with cells wrapped onto as many lines as keep the band within maxHeight.
+ */
+export function overlayBandHeight(style: Style, page: { width: number; height: number }, overlays: Overlay[]): (width: number, maxHeight: number) => number {
   const panels = overlayPanels(overlays);
   const sizes = sizesFor(style, page);
   const pStyle = panelStyle(style, sizes);
   const gap = sizes.mm(style.page.gap);
-  return (width) => (panels.length === 0 ? 0 : overlayRows(panels, pStyle, width, gap).reduce((sum, row, i) => sum + row.height + (i > 0 ? gap : 0), 0));
+  return (width, maxHeight) => (panels.length === 0 ? 0 : bandHeight(overlayRowsWithin(panels, pStyle, width, gap, maxHeight).rows, gap));
 }
 
 /** Width the panels need for a saturation table at the smallest type the arrangement may use. */
