@@ -116,12 +116,31 @@ export function saturationTablePanel(rows: SaturationRow[], units: DisplayUnits,
 /** A cell that reads as a number (with a unit after it, or empty): such columns are set flush right. */
 const NUMERIC = /^$|^[\u2212+-]?\d[\d.,]*(\s*\S+)?$/;
 
+/** A list of figures (at most two columns, the last numeric) longer than this many rows is set in two halves. */
+const FOLD_ROWS = 8;
+
+/**
+ * A long list of figures (label and value, such as a cycle's performance) folded into two halves side by
+ * side: half as tall, so the chart keeps its height. Lists of text (conditions, notes) are left whole,
+ * since halving their width would only cut their cells shorter.
+ */
+function folded(columns: string[], rows: string[][]): { columns: string[]; rows: string[][] } {
+  const last = columns.length - 1;
+  if (columns.length > 2 || rows.length <= FOLD_ROWS || !rows.every((r) => NUMERIC.test(r[last] ?? ""))) return { columns, rows };
+  const half = Math.ceil(rows.length / 2);
+  const blank = columns.map(() => "");
+  return { columns: [...columns, ...columns], rows: rows.slice(0, half).map((r, i) => [...r, ...(rows[half + i] ?? blank)]) };
+}
+
 export function overlayPanels(overlays: Overlay[]): Panel[] {
   return overlays.flatMap((o, i) =>
-    o.tables.map((t, j) => ({
-      id: `overlay-${i}-${j}`,
-      title: t.title === o.name ? t.title : `${o.name}: ${t.title}`,
-      items: [{ kind: "table" as const, columns: t.columns, units: t.columns.map(() => ""), rows: t.rows, align: t.columns.map((_, k) => (t.rows.every((r) => NUMERIC.test(r[k] ?? "")) ? "end" : "start") as "start" | "end") }],
-    })),
+    o.tables.map((t, j) => {
+      const { columns, rows } = folded(t.columns, t.rows);
+      return {
+        id: `overlay-${i}-${j}`,
+        title: t.title === o.name ? t.title : `${o.name}: ${t.title}`,
+        items: [{ kind: "table" as const, columns, units: columns.map(() => ""), rows, align: columns.map((_, k) => (rows.every((r) => NUMERIC.test(r[k] ?? "")) ? "end" : "start") as "start" | "end") }],
+      };
+    }),
   );
 }

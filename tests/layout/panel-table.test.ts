@@ -1,9 +1,12 @@
 // Tables in panels: columns fitted to the width (the widest give way first, never below their longest word),
-// cells wrapped onto as many lines as allowed, the last cut with an ellipsis only beyond that.
+// cells wrapped onto as many lines as allowed, the last cut with an ellipsis only beyond that; long lists of
+// figures in overlay tables folded into two halves.
 import { describe, expect, it } from "vitest";
 import { drawPanel, fitColumns, panelHeight, type Panel, type PanelStyle } from "../../src/layout/panel.js";
 import type { Mark } from "../../src/layout/scene.js";
 import { lineHeight, textWidth } from "../../src/layout/text.js";
+import { overlayPanels } from "../../src/layout/sheet-panels.js";
+import type { Overlay } from "../../src/cycle/overlay.js";
 
 const style: PanelStyle = {
   pt: 8, titlePt: 9, ink: "#000000", muted: "#555555", fill: "#ffffff", stroke: { colour: "#000000", width: 0.2 },
@@ -49,5 +52,25 @@ describe("panel tables", () => {
     const marks = texts(drawPanel(panel, style, 0, 0, 120, panelHeight(panel, style, 120, 3), 3));
     expect(marks.some((t) => t.text === "  indented")).toBe(true);
     expect(marks.some((t) => t.text === LONG)).toBe(true);
+  });
+});
+
+describe("overlay tables", () => {
+  const overlay = (rows: string[][]): Overlay => ({ name: "design", kind: "cycle", path: [], closed: true, points: [], tables: [{ title: "t", columns: ["", ""], rows }] });
+
+  it("a long list of figures is set in two halves side by side, in reading order; a list of text is left whole", () => {
+    const figures = Array.from({ length: 17 }, (_, i) => [`quantity ${i}`, `${i}.5 kJ/kg`]);
+    const item = overlayPanels([overlay(figures)])[0]!.items[0]!;
+    if (item.kind !== "table") throw new Error("not a table");
+    expect(item.columns).toHaveLength(4);
+    expect(item.rows).toHaveLength(9);
+    expect(item.rows[0]).toEqual(["quantity 0", "0.5 kJ/kg", "quantity 9", "9.5 kJ/kg"]);
+    expect(item.rows[8]).toEqual(["quantity 8", "8.5 kJ/kg", "", ""]);
+    expect(item.align).toEqual(["start", "end", "start", "end"]);
+    const words = Array.from({ length: 13 }, (_, i) => [`condition ${i}`, "steady flow; compressor and lines adiabatic"]);
+    const whole = overlayPanels([overlay(words)])[0]!.items[0]!;
+    if (whole.kind !== "table") throw new Error("not a table");
+    expect(whole.rows).toHaveLength(13);
+    expect(whole.columns).toHaveLength(2);
   });
 });
