@@ -1,5 +1,24 @@
-// Process CPU-time measurement for the benchmarks. process.cpuUsage() itself costs about 2 µs on these
-// machines, so it is read only once per batch of calls lasting about a millisecond, never per call.
+// Timing helpers for the benchmarks. process.cpuUsage() itself costs about 2 µs on these machines, so it is
+// read only once per batch of calls lasting about a millisecond, never per call.
+import { spawnSync } from "node:child_process";
+import { fileURLToPath } from "node:url";
+
+const CLI = fileURLToPath(new URL("../bin/domeprint.js", import.meta.url));
+
+/** The median of a list of numbers (the mean of the middle two for an even count). */
+export function median(xs) {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 ? s[(s.length - 1) / 2] : 0.5 * (s[s.length / 2 - 1] + s[s.length / 2]);
+}
+
+/** Wall time [ms] of one cold `domeprint sheet FLUID …args` in a fresh node process; throws if it fails. */
+export function coldSheetMs(fluid, args) {
+  const t0 = performance.now();
+  const r = spawnSync(process.execPath, [CLI, "sheet", fluid, ...args], { encoding: "utf8" });
+  const ms = performance.now() - t0;
+  if (r.status !== 0) throw new Error(`domeprint sheet ${fluid} exited ${r.status}: ${r.stderr}`);
+  return ms;
+}
 
 /** CPU time [ms] used by this process since the start value c0 (from process.cpuUsage()). */
 function cpuMsSince(c0) {

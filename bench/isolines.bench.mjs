@@ -1,15 +1,11 @@
 // Benchmark of the isoline generator: time to trace the default line set of an A2 sheet, after warm-up.
 // Run `npx tsc -p tsconfig.json` first, then `node bench/isolines.bench.mjs [fluid …]`; figures go to stdout.
 import { buildLineSet } from "../dist/isolines/index.js";
+import { median } from "./clock.mjs";
 
 const fluids = process.argv.slice(2).length ? process.argv.slice(2) : ["R134a", "water", "co2", "R410A"];
 const TARGET_MS = { R134a: 150, water: 300 };
 const WARM_UP = 3, RUNS = 15;
-
-function median(xs) {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2] : 0.5 * (s[s.length / 2 - 1] + s[s.length / 2]);
-}
 
 /** One build, timed in this process's CPU time (steady on a shared machine) and in wall time. */
 function timed(fluid) {

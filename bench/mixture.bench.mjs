@@ -34,24 +34,16 @@ for (const id of ["R454B", "R407C-mix"]) {
 
 // A full A3 sheet (PDF + SVG) of each: a cold command (fresh node process running the CLI, median of 3) and
 // in-process after a warm-up render (median of 3). Target ≤ 3 s.
-const { spawnSync } = await import("node:child_process");
 const { mkdtempSync, rmSync } = await import("node:fs");
 const { tmpdir } = await import("node:os");
 const { join } = await import("node:path");
-const { fileURLToPath } = await import("node:url");
 const { renderSheet } = await import("../dist/sheet/index.js");
-const cli = fileURLToPath(new URL("../bin/domeprint.js", import.meta.url));
-const median = (xs) => [...xs].sort((a, b) => a - b)[xs.length >> 1];
+const { coldSheetMs, median } = await import("./clock.mjs");
 const dir = mkdtempSync(join(tmpdir(), "domeprint-bench-"));
 try {
   for (const id of ["R407C-mix", "R454B"]) {
     const cold = [];
-    for (let i = 0; i < 3; i++) {
-      const t0 = performance.now();
-      const r = spawnSync(process.execPath, [cli, "sheet", id, "--paper", "A3", "--format", "pdf,svg", "--date", "2026-12-01", "-q", "-o", dir], { encoding: "utf8" });
-      if (r.status !== 0) throw new Error(`domeprint sheet ${id} exited ${r.status}: ${r.stderr}`);
-      cold.push(performance.now() - t0);
-    }
+    for (let i = 0; i < 3; i++) cold.push(coldSheetMs(id, ["--paper", "A3", "--format", "pdf,svg", "--date", "2026-12-01", "-q", "-o", dir]));
     const options = { fluid: id, paper: "A3", formats: ["pdf", "svg"], date: "2026-12-01" };
     await renderSheet(options);
     const warm = [];

@@ -1,29 +1,15 @@
 // Benchmark of one A1 sheet in PDF and SVG: from a cold command (a fresh node process running the CLI)
 // and in-process after warm-up, with the PDF's size. Run `npx tsc -p tsconfig.json` first.
-import { spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { fileURLToPath } from "node:url";
 import { renderSheet } from "../dist/sheet/index.js";
+import { coldSheetMs, median } from "./clock.mjs";
 
 const fluids = process.argv.slice(2).length ? process.argv.slice(2) : ["R717", "R134a", "R744", "R407C"];
 const COLD_RUNS = 3, WARM_UP = 2, RUNS = 5;
 const TARGET = { cold: 1500, warm: 500, pdfBytes: 2 * 1024 * 1024 };
-const cli = fileURLToPath(new URL("../bin/domeprint.js", import.meta.url));
-
-function median(xs) {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2] : 0.5 * (s[s.length / 2 - 1] + s[s.length / 2]);
-}
-
-function cold(fluid, dir) {
-  const t0 = performance.now();
-  const r = spawnSync(process.execPath, [cli, "sheet", fluid, "--paper", "A1", "--format", "pdf,svg", "--date", "2025-01-01", "-q", "-o", dir], { encoding: "utf8" });
-  const ms = performance.now() - t0;
-  if (r.status !== 0) throw new Error(`domeprint sheet ${fluid} exited ${r.status}: ${r.stderr}`);
-  return ms;
-}
+const cold = (fluid, dir) => coldSheetMs(fluid, ["--paper", "A1", "--format", "pdf,svg", "--date", "2025-01-01", "-q", "-o", dir]);
 
 async function warm(fluid) {
   const options = { fluid, paper: "A1", formats: ["pdf", "svg"], date: "2025-01-01" };

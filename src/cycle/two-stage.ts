@@ -73,6 +73,26 @@ function vapourFraction(f: Fluid, st: State, ref: ReferenceName): number {
   return (st.h - hL) / (hV - hL);
 }
 
+/**
+ * The high stage every arrangement shares: compression from `suction` (flow `highFlow` per unit through the
+ * evaporator), the discharge line drop, and the steps from the low stage through to the condenser outlet.
+ */
+function highSide(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, c: Common, suction: State, highFlow: number, dischargeDrop: number,
+  suctionSame = false): { high: Compression; steps: ChainStep[] } {
+  const high = compress(f, suction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
+  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  return {
+    high,
+    steps: [
+      ...lowSteps(c),
+      { state: suction, role: "high-stage-suction", flow: highFlow, process: "isobaric", same: suctionSame },
+      { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
+      { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
+      { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    ],
+  };
+}
+
 /** An arrangement's states in flow order, its side stream (leaving the main circuit at branchFrom, rejoining at branchJoin), and its flows. */
 interface Built { steps: ChainStep[]; branch: ChainStep[]; branchFrom: Role; branchJoin: Role; highFlow: number; low: Compression; high: Compression; notes: string[]; approach?: number }
 
@@ -87,14 +107,9 @@ function flashTank(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels, 
   const tankLiquid = flashes ? statePX(f, pi, 0, ref) : tankIn;
   const tankVapour = statePX(f, pi, 1, ref);
   const highSuction = flashes ? mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: tankVapour, flow: highFlow - 1 }], ref) : c.low.discharge;
-  const high = compress(f, highSuction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
-  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const { high, steps: shared } = highSide(f, ref, spec, L, c, highSuction, highFlow, dischargeDrop, !flashes);
   const steps: ChainStep[] = [
-    ...lowSteps(c),
-    { state: highSuction, role: "high-stage-suction", flow: highFlow, process: "isobaric", same: !flashes },
-    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
-    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
-    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    ...shared,
     { state: tankIn, role: "flash-tank-inlet", flow: highFlow, process: "isenthalpic" },
     { state: tankLiquid, role: "flash-tank-liquid", flow: 1, process: "isobaric", same: !flashes },
     { state: throttle(f, tankLiquid, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
@@ -116,14 +131,9 @@ function openIntercooler(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Le
   const tankVapour = statePX(f, pi, 1, ref);
   if (!(c.condOut.h < tankVapour.h)) throw cycleInputError("intermediate", pi, levelText(L.intermediate), "the condenser liquid would arrive in the tank as vapour", "an intermediate level where the condenser liquid stays partly liquid");
   const highFlow = (c.low.discharge.h - tankLiquid.h) / (tankVapour.h - c.condOut.h);
-  const high = compress(f, tankVapour, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
-  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const { high, steps: shared } = highSide(f, ref, spec, L, c, tankVapour, highFlow, dischargeDrop);
   const steps: ChainStep[] = [
-    ...lowSteps(c),
-    { state: tankVapour, role: "high-stage-suction", flow: highFlow, process: "isobaric" },
-    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
-    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
-    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    ...shared,
     { state: tankIn, role: "flash-tank-inlet", flow: highFlow, process: "isenthalpic" },
     { state: tankLiquid, role: "flash-tank-liquid", flow: 1, process: "isobaric" },
     { state: throttle(f, tankLiquid, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
@@ -148,14 +158,9 @@ function economiser(f: Fluid, ref: ReferenceName, spec: TwoStageSpec, L: Levels,
   const injFlow = (c.condOut.h - liquidOut.h) / (injOut.h - injIn.h);
   const highFlow = 1 + injFlow;
   const highSuction = mix(f, pi, [{ state: c.low.discharge, flow: 1 }, { state: injOut, flow: injFlow }], ref);
-  const high = compress(f, highSuction, L.condensing.p + dischargeDrop, spec.highStage, ref, compressorInput(spec.highStage, "high stage"));
-  const condIn = dischargeDrop > 0 ? throttle(f, high.discharge, L.condensing.p, ref) : high.discharge;
+  const { high, steps: shared } = highSide(f, ref, spec, L, c, highSuction, highFlow, dischargeDrop);
   const steps: ChainStep[] = [
-    ...lowSteps(c),
-    { state: highSuction, role: "high-stage-suction", flow: highFlow, process: "isobaric" },
-    { state: high.discharge, role: "high-stage-discharge", flow: highFlow, process: "compression" },
-    { state: condIn, role: "condenser-inlet", flow: highFlow, process: "isenthalpic", same: dischargeDrop === 0 },
-    { state: c.condOut, role: "condenser-outlet", flow: highFlow, process: "isobaric" },
+    ...shared,
     { state: liquidOut, role: "economiser-liquid-outlet", flow: 1, process: "isobaric" },
     { state: throttle(f, liquidOut, L.evaporating.p, ref), role: "evaporator-inlet", flow: 1, process: "isenthalpic" },
   ];

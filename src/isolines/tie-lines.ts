@@ -3,14 +3,8 @@
 import { equationCriticalPoint, H, propertiesTRho, S, saturationP, saturationPressureRange, saturationT, type Fluid, type Saturation } from "../eos/index.js";
 import { attempt, type Context } from "./context.js";
 
-/** Both ends of a tie line, mass-based, h and s in the chosen reference; densities molar [mol/m³]. */
-export interface TieLine {
-  TL: number;
-  TV: number;
-  pL: number;
-  pV: number;
-  rhoL: number;
-  rhoV: number;
+/** Both ends of a tie line (the engine's Saturation, densities molar [mol/m³]) with mass-based h, s and v in the chosen reference. */
+export interface TieLine extends Saturation {
   hL: number;
   hV: number;
   sL: number;

@@ -164,7 +164,7 @@ function tableMinimums(item: Extract<PanelItem, { kind: "table" }>, pt: number):
 }
 
 /** Wraps a cell onto at most `max` lines; a longer text ends its last line with an ellipsis. */
-function cellLines(content: string, pt: number, width: number, weight: "normal" | "bold", max: number): string[] {
+function wrapCell(content: string, pt: number, width: number, weight: "normal" | "bold", max: number): string[] {
   if (textWidth(content, pt, weight) <= width) return [content]; // as written, leading spaces (indents) kept
   const lines = wrap(content, pt, width, weight);
   if (lines.length <= max) return lines;
@@ -180,7 +180,7 @@ function setTable(item: Extract<PanelItem, { kind: "table" }>, c: Ctx, x: number
   const cols = fitColumns(tableWidths(item, pt), inner(c), tableMinimums(item, pt));
   /** Sets one row from `top` (or only measures it without `out`); returns its height. */
   const row = (cells: string[], top: number, weight: "normal" | "bold", colour: string, stripe: boolean) => {
-    const lines = cells.map((content, j) => cellLines(content, pt, cols[j]! - 1.5 * fig, weight, c.cellLines));
+    const lines = cells.map((content, j) => wrapCell(content, pt, cols[j]! - 1.5 * fig, weight, c.cellLines));
     const height = lh * Math.max(1, ...lines.map((l) => l.length));
     if (stripe) out?.push(rect(x, top, inner(c), height, { colour: s.stripe }));
     let left = x;

@@ -105,7 +105,12 @@ export interface EngineData {
  * asked for, no isenthalps (the grid carries enthalpy) and no 5-degree isotherms (no room for labels).
  */
 export function engineData(fluid: Fluid, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }, given: SheetLineOptions = {}): EngineData {
-  const lines = buildLineSet(fluid.id, {
+  return { fluid, reference: ref, lines: sheetLines(fluid.id, ref, units, frame, given) };
+}
+
+/** The line set of a fluid or blend by id for the planned frame, with the sheet's defaults (see engineData). */
+export function sheetLines(id: string, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }, given: SheetLineOptions = {}): LineSet {
+  return buildLineSet(id, {
     units: units.system,
     reference: ref,
     frame: { widthMm: frame.width, heightMm: frame.height },
@@ -113,5 +118,4 @@ export function engineData(fluid: Fluid, ref: ReferenceName, units: DisplayUnits
     families: { isenthalps: false, ...given.families },
     densities: { minorIsothermSpacingMm: 0, ...given.densities },
   });
-  return { fluid, reference: ref, lines };
 }

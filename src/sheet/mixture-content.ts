@@ -2,7 +2,8 @@
 // (composition and estimated pairs for the title block), bubble and dew pressures at whole degrees, the table.
 import { mixtureReferenceOffset, mixtureSaturationT, REFERENCE_DESCRIPTIONS, type Mixture, type ReferenceName } from "../eos/index.js";
 import { attempt } from "../errors.js";
-import { buildLineSet, type LineSet } from "../isolines/index.js";
+import type { LineSet } from "../isolines/index.js";
+import { sheetLines } from "./content.js";
 import type { FluidIdentity, SaturationRow, SaturationTick } from "../layout/content.js";
 import { toDisplay, type DisplayUnits } from "../layout/display-units.js";
 import { toSI } from "../units/index.js";
@@ -78,14 +79,7 @@ export function mixtureSaturationRows(mix: Mixture, lines: LineSet, units: Displ
 
 /** The mixture's LineSet for the planned frame, with the same sheet defaults as a pure fluid's (see content.ts). */
 export function mixtureLines(mix: Mixture, ref: ReferenceName, units: DisplayUnits, frame: { width: number; height: number }, given: SheetLineOptions = {}): LineSet {
-  return buildLineSet(mix.id, {
-    units: units.system,
-    reference: ref,
-    frame: { widthMm: frame.width, heightMm: frame.height },
-    ...(given.window ? { window: given.window } : {}),
-    families: { isenthalps: false, ...given.families },
-    densities: { minorIsothermSpacingMm: 0, ...given.densities },
-  });
+  return sheetLines(mix.id, ref, units, frame, given);
 }
 
 /** What identifies the mixture's sheet in the inputs hash: its components and composition. */

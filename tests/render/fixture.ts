@@ -1,7 +1,8 @@
 // A small hand-built scene that exercises every mark, clip, halo, rotation and awkward character.
 // Invented geometry for renderer tests only; it depicts no fluid.
 
-import type { Scene } from "../../src/layout/scene.js";
+import type { Scene, TextMark } from "../../src/layout/scene.js";
+import { FONT_FAMILY } from "../../src/render/fonts.js";
 
 export const SPECIAL_TEXT = `a<b & "c" 'd'`;
 export const NON_LATIN_TEXT = "Ø±ΔТ";
@@ -101,4 +102,19 @@ export function testScene(): Scene {
 export function bleedScene(): Scene {
   const scene = testScene();
   return { ...scene, bleed: 3, cropMarks: true, background: "#fdf6e3" };
+}
+
+/** A blank page of the given size (mm) holding only the given text marks, in one layer. */
+export function textScene(marks: TextMark[], width: number, height: number): Scene {
+  return {
+    width,
+    height,
+    bleed: 0,
+    cropMarks: false,
+    background: "#ffffff",
+    fontFamily: FONT_FAMILY,
+    clips: [],
+    layers: [{ id: "t", label: "Text", marks }],
+    meta: { title: "t", creator: "tests", date: "2024-05-01" },
+  };
 }

@@ -4,23 +4,12 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { MM_PER_PT, type Scene, type TextMark } from "../../src/layout/scene.js";
-import { capHeight, FONT_FAMILY, fontPaths, measureText, missingCharacters } from "../../src/render/fonts.js";
+import { capHeight, fontPaths, measureText, missingCharacters } from "../../src/render/fonts.js";
 import { renderPng } from "../../src/render/png.js";
+import { textScene } from "./fixture.js";
 import { decodePng, differingShare, inkedShare } from "./tools.js";
 
-function textSheet(marks: TextMark[]): Scene {
-  return {
-    width: 120,
-    height: 40,
-    bleed: 0,
-    cropMarks: false,
-    background: "#ffffff",
-    fontFamily: FONT_FAMILY,
-    clips: [],
-    layers: [{ id: "t", label: "Text", marks }],
-    meta: { title: "t", creator: "tests", date: "2024-05-01" },
-  };
-}
+const textSheet = (marks: TextMark[]): Scene => textScene(marks, 120, 40);
 
 describe("fonts", () => {
   it("resolves regular and bold TrueType files", () => {

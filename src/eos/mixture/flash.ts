@@ -51,15 +51,29 @@ function lnKVapourLiquid(sat: SaturationPoint, k: number): number {
 }
 
 /**
+ * A split interpolated between the dew point (f = 0) and the bubble point (f = 1): ln K (vapour over liquid)
+ * written into lnK, and the liquid and vapour molar densities returned. The start of every two-phase solve.
+ */
+function interpolatedSplit(mix: Mixture, bub: SaturationPoint, dew: SaturationPoint, f: number, lnK: Float64Array): { rhoL: number; rhoV: number } {
+  for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
+  return { rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed };
+}
+
+/** ln p a fraction f of the way from the dew pressure (f = 0) to the bubble pressure (f = 1). */
+function interpolatedLnP(bub: SaturationPoint, dew: SaturationPoint, f: number): number {
+  return Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p));
+}
+
+/**
  * Splits the feed at (T, p) inside the dome, K-factors interpolated between the dew point (f = 0) and the
  * bubble point (f = 1) unless `warm` keeps those of the previous split. Null if the split finds one phase.
  */
 function split(mix: Mixture, T: number, p: number, bub: SaturationPoint, dew: SaturationPoint, f: number, warm: boolean): boolean {
   const sp = mix.split;
   if (!warm) {
-    for (let k = 0; k < mix.N; k++) sp.lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
-    sp.liquid.rho = f * bub.rhoFeed + (1 - f) * dew.rhoIncipient;
-    sp.vapour.rho = f * bub.rhoIncipient + (1 - f) * dew.rhoFeed;
+    const { rhoL, rhoV } = interpolatedSplit(mix, bub, dew, f, sp.lnK);
+    sp.liquid.rho = rhoL;
+    sp.vapour.rho = rhoV;
   }
   return sp.flash(mix.z, T, p);
 }
@@ -163,13 +177,9 @@ function twoPhaseAtP(mix: Mixture, p: number, bub: SaturationPoint, dew: Saturat
  */
 function newtonTwoPhase(mix: Mixture, p: number, bub: SaturationPoint, dew: SaturationPoint, fT: number, which: Target | "x", target: number,
   stallTolerance: number, ref: ReferenceName, off: ReferenceOffset, margin = 0): MixtureState | null {
-  const T0 = bub.T + fT * (dew.T - bub.T);
-  const f = 1 - fT;
   const lnK = new Float64Array(mix.N);
-  for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
   const r = splitNewton(mix, { fixed: "p", p, which, target }, {
-    free: T0, lo: bub.T - margin, hi: dew.T + margin, lnK, beta: fT,
-    rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance,
+    free: bub.T + fT * (dew.T - bub.T), lo: bub.T - margin, hi: dew.T + margin, lnK, beta: fT, ...interpolatedSplit(mix, bub, dew, 1 - fT, lnK), stallTolerance,
   });
   if (!r) return null;
   return mixtureTwoPhaseState(mix, r.T, p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
@@ -278,24 +288,30 @@ function flashTX(mix: Mixture, T: number, q: number, ref: ReferenceName, off: Re
   if (q === 0) return saturatedState(mix, bub, ref, off);
   if (q === 1) return saturatedState(mix, dew, ref, off);
   // Newton on (ln K, ln p, β) from the split interpolated at the quality, then the bracketed search.
-  const f = 1 - q;
   const lnK = new Float64Array(mix.N);
-  for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
   const r = attempt(() => splitNewton(mix, { fixed: "T", T, which: "x", target: q }, {
-    free: Math.exp(Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p))), lo: dew.p, hi: bub.p, lnK, beta: q,
-    rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance: 1e-10,
+    free: Math.exp(interpolatedLnP(bub, dew, 1 - q)), lo: dew.p, hi: bub.p, lnK, beta: q, ...interpolatedSplit(mix, bub, dew, 1 - q, lnK), stallTolerance: 1e-10,
   }));
   if (r) return mixtureTwoPhaseState(mix, T, r.p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off);
+  // Quality falls as p rises from the dew to the bubble pressure.
+  return twoPhaseAtT(mix, T, bub, dew, (st) => q - st.x!, q - 1, q, ref, off, "quality at fixed temperature");
+}
+
+/**
+ * Two-phase state at temperature T where residual(state) = 0, by the bracketed search in ln p on (T, p)
+ * splits between the dew pressure (residual rDew) and the bubble pressure (rBub), of opposite signs.
+ */
+function twoPhaseAtT(mix: Mixture, T: number, bub: SaturationPoint, dew: SaturationPoint, residual: (st: MixtureState) => number, rDew: number, rBub: number,
+  ref: ReferenceName, off: ReferenceOffset, what: string): MixtureState {
   let st: MixtureState | undefined;
-  // Quality falls as p rises from the dew to the bubble pressure; solved in ln p.
   const g = (lnp: number, warm: boolean) => {
     const p = Math.exp(lnp);
     const f = (lnp - Math.log(dew.p)) / (Math.log(bub.p) - Math.log(dew.p));
-    if (!split(mix, T, p, bub, dew, f, warm) && !split(mix, T, p, bub, dew, f, false)) throw convergenceError("quality at fixed temperature", `T = ${T} K, p = ${p} Pa of ${mix.id}`);
+    if (!split(mix, T, p, bub, dew, f, warm) && !split(mix, T, p, bub, dew, f, false)) throw convergenceError(what, `T = ${T} K, p = ${p} Pa of ${mix.id}`);
     st = splitState(mix, T, p, ref, off);
-    return q - st.x!;
+    return residual(st);
   };
-  regulaFalsi(Math.log(dew.p), q - 1, Math.log(bub.p), q, g, 1e-12, "quality at fixed temperature");
+  regulaFalsi(Math.log(dew.p), rDew, Math.log(bub.p), rBub, g, 1e-12, what);
   return st!;
 }
 
@@ -321,10 +337,8 @@ function flashTRho(mix: Mixture, T: number, rhoMass: number, ref: ReferenceName,
     const vb = 1 / bub.rhoFeed, vd = 1 / dew.rhoFeed;
     const f = 1 - (v - vb) / (vd - vb); // weight of the bubble end
     const lnK = new Float64Array(mix.N);
-    for (let k = 0; k < mix.N; k++) lnK[k] = lnKVapourLiquid(dew, k) + f * (lnKVapourLiquid(bub, k) - lnKVapourLiquid(dew, k));
     const r = attempt(() => splitNewton(mix, { fixed: "T", T, which: "v", target: v }, {
-      free: Math.exp(Math.log(dew.p) + f * (Math.log(bub.p) - Math.log(dew.p))), lo: dew.p / margin, hi: bub.p * margin, lnK, beta: 1 - f,
-      rhoL: f * bub.rhoFeed + (1 - f) * dew.rhoIncipient, rhoV: f * bub.rhoIncipient + (1 - f) * dew.rhoFeed, stallTolerance: 1e-11 * v,
+      free: Math.exp(interpolatedLnP(bub, dew, f)), lo: dew.p / margin, hi: bub.p * margin, lnK, beta: 1 - f, ...interpolatedSplit(mix, bub, dew, f, lnK), stallTolerance: 1e-11 * v,
     }));
     return r ? mixtureTwoPhaseState(mix, T, r.p, r.beta, r.x, r.rhoL, r.y, r.rhoV, ref, off) : null;
   };
@@ -342,16 +356,7 @@ function flashTRho(mix: Mixture, T: number, rhoMass: number, ref: ReferenceName,
   const exact = newton(bub, dew, 1);
   if (exact) return exact;
   // Fallback: the overall volume of the (T, p) split falls as p rises from the dew to the bubble pressure.
-  let st: MixtureState | undefined;
-  const g = (lnp: number, warm: boolean) => {
-    const p = Math.exp(lnp);
-    const fp = (lnp - Math.log(dew.p)) / (Math.log(bub.p) - Math.log(dew.p));
-    if (!split(mix, T, p, bub, dew, fp, warm) && !split(mix, T, p, bub, dew, fp, false)) throw convergenceError("density at fixed temperature", `T = ${T} K, p = ${p} Pa of ${mix.id}`);
-    st = splitState(mix, T, p, ref, off);
-    return st.v / (1 / rhoMass) - 1;
-  };
-  regulaFalsi(Math.log(dew.p), vd / v - 1, Math.log(bub.p), vb / v - 1, g, 1e-12, "density at fixed temperature");
-  return st!;
+  return twoPhaseAtT(mix, T, bub, dew, (st) => st.v / (1 / rhoMass) - 1, vd / v - 1, vb / v - 1, ref, off, "density at fixed temperature");
 }
 
 /** Checks a reference name for a mixture and returns its offset. */

@@ -1,7 +1,7 @@
 // The chart lines of a real mixture: bubble and dew lines, isotherms sloped across the dome between them,
 // quality lines and isentropes through the two-phase region, traced to the same page tolerance as pure fluids.
 import { H, P, mixtureFlash, mixtureReferenceOffset, mixtureSaturationT, type Mixture, type MixtureState, type ReferenceName } from "../../eos/index.js";
-import { mixtureDensityTP, mixturePropertiesTRho } from "../../eos/mixture/index.js";
+import { mixtureDensityTP, mixturePropertiesTRho, saturationPoint } from "../../eos/mixture/index.js";
 import { inputError } from "../../errors.js";
 import { attempt } from "../context.js";
 import { roundEnthalpyWindow } from "../window.js";
@@ -165,10 +165,11 @@ function crossingTemperature(b: MixBuild, rho: number): number | undefined {
   let g0 = Math.log(a.rhoFeed / rho), g1 = Math.log(c.rhoFeed / rho);
   for (let it = 0; it < 12 && Math.abs(T1 - T0) > 1e-9 * T1 && g1 !== g0; it++) {
     const T = Math.min(Math.max(T1 - g1 * (T1 - T0) / (g1 - g0), b.mix.Tmin), b.Tc);
-    const sat = attempt(() => mixtureSaturationT(b.mix, T, b.ref));
+    // Only the one side's feed density is needed: no second point, no property states.
+    const sat = attempt(() => saturationPoint(b.mix, kind, "T", T));
     if (!sat) break;
     T0 = T1; g0 = g1;
-    T1 = T; g1 = Math.log((kind === "dew" ? sat.dew.rho : sat.bubble.rho) / b.mix.M / rho);
+    T1 = T; g1 = Math.log(sat.rhoFeed / rho);
   }
   return T1;
 }
